@@ -1,0 +1,192 @@
+/**
+ * The written steps as a document: what a beader reads, built from the
+ * model's per-unit steps and thread path, so the words can never disagree
+ * with the chart. Renderers (steps-render.ts) only lay this out; the JSON
+ * form of `fourfold steps --format json` is this document as it is.
+ */
+import type { Layout } from '../parser/ast.js';
+import type { Model, Place, RowInfo, Unit, UnitStep } from './model.js';
+
+export interface BeadRef {
+  key: string;
+  name: string;
+  /** Where the bead sits, in plain words ("top", "left side", "bottom of the next unit"). */
+  where: string;
+}
+
+/** A run of pick-ups or of passes, in thread order. */
+export interface StepMove {
+  kind: 'pickup' | 'pass';
+  beads: BeadRef[];
+}
+
+export interface StepUnit {
+  number: number;
+  unit: number;
+  mark: '' | '*' | '+';
+  /** Where the first new bead goes; only when the new beads are not all one colour. */
+  cue?: string;
+  /** Going round the unit: pick up, then pass through to close it. */
+  round: StepMove[];
+  /** Beads to pass through to reach the next unit (empty when none, or last). */
+  moveOn: BeadRef[];
+  /** Side beads the row shows once this unit is done: the count to find one's place by. */
+  sideBeads: number;
+}
+
+export interface StepRow {
+  row: number;
+  word: 'row' | 'round';
+  units: number;
+  beads: number;
+  direction: string;
+  notes: string[];
+  steps: StepUnit[];
+}
+
+export interface StepsDoc {
+  schema: 'fourfold.steps/1';
+  title: string;
+  designer?: string;
+  beads: string;
+  layout: Layout;
+  colors: { key: string; name: string; hex: string }[];
+  glossary: { term: string; meaning: string }[];
+  notes: string[];
+  rows: StepRow[];
+}
+
+type Heading = RowInfo['heading'];
+
+/** Place names as a beader sees them on the chart (rows stack upward, rounds grow outward). */
+function placeWords(place: Place, heading: Heading, layout: Layout): string {
+  if (place === 'top') return layout === 'round' ? 'outer edge' : 'top';
+  if (place === 'base') return layout === 'round' ? 'inner edge' : 'bottom';
+  if (heading === 'around') return place === 'far' ? 'side ahead' : 'side behind';
+  const right = (place === 'far') === (heading === 'right');
+  return right ? 'right side' : 'left side';
+}
+
+function cueWords(place: Place, heading: Heading, layout: Layout): string {
+  const where = placeWords(place, heading, layout);
+  return place === 'top' ? 'first bead on top' : `first bead on the ${where}`;
+}
+
+function directionWords(heading: Heading, word: 'row' | 'round'): string {
+  if (heading === 'right') return 'working left to right';
+  if (heading === 'left') return 'working right to left';
+  return `working round, the same way as the ${word} before`;
+}
+
+const GLOSSARY = {
+  unit: 'a square ring of four beads, one on each side; neighbouring units share the bead between them.',
+  'pick up': 'slide the beads named onto the needle, in the order given.',
+  'pass through': 'take the needle through a bead already in place, the way the thread is going.',
+  'side beads': 'the beads standing across the row between units; count them to find your place.',
+  cue: 'where the first new bead goes, given only when a unit uses more than one colour.',
+  round: 'a row that goes all the way round and joins up with its own start.',
+  'fresh ring (*)': 'a unit of four new beads that starts the row one place further out.',
+  'increase (+)': 'a unit with no bead below it, which makes the row one unit longer.',
+} as const;
+
+function glossary(model: Model): StepsDoc['glossary'] {
+  const marks = new Set(model.units.map((u) => u.mark));
+  const terms: (keyof typeof GLOSSARY)[] = ['unit', 'pick up', 'pass through', 'side beads'];
+  if (model.steps.some((s) => s.cue)) terms.push('cue');
+  if (model.layout.kind !== 'flat') terms.push('round');
+  if (marks.has('*')) terms.push('fresh ring (*)');
+  if (marks.has('+')) terms.push('increase (+)');
+  return terms.map((term) => ({ term, meaning: GLOSSARY[term] }));
+}
+
+interface Ctx {
+  model: Model;
+  names: Map<string, string>;
+}
+
+function placeOf(unit: Unit, bead: number): Place | null {
+  for (const p of ['base', 'far', 'top', 'near'] as const) if (unit.places[p] === bead) return p;
+  return null;
+}
+
+function beadRef(ctx: Ctx, bead: number, where: string): BeadRef {
+  const key = ctx.model.beads[bead]?.color ?? '?';
+  return { key, name: ctx.names.get(key) ?? '', where };
+}
+
+/** Names a bead from where the beader's needle is: this unit, the next, or by row and unit. */
+function locate(ctx: Ctx, bead: number, unit: Unit, next: Unit | undefined): string {
+  const { model } = ctx;
+  const heading = model.rows.find((r) => r.row === unit.row)?.heading ?? 'right';
+  const here = placeOf(unit, bead);
+  if (here) return placeWords(here, heading, model.layout.kind);
+  const there = next ? placeOf(next, bead) : null;
+  if (next && there) return `${placeWords(there, heading, model.layout.kind)} of the next unit`;
+  const holder = model.units[model.beads[bead]?.units[0] ?? -1];
+  if (!holder) return 'bead';
+  const holderHeading = model.rows.find((r) => r.row === holder.row)?.heading ?? 'right';
+  const p = placeOf(holder, bead) ?? 'top';
+  return `${placeWords(p, holderHeading, model.layout.kind)} of ${model.rows.find((r) => r.row === holder.row)?.word ?? 'row'} ${holder.row}, unit ${holder.index}`;
+}
+
+function roundMoves(ctx: Ctx, step: UnitStep, heading: Heading): StepMove[] {
+  const moves: StepMove[] = [];
+  for (const action of step.actions) {
+    const ref = beadRef(ctx, action.bead, placeWords(action.place, heading, ctx.model.layout.kind));
+    const last = moves[moves.length - 1];
+    if (last && last.kind === action.kind) last.beads.push(ref);
+    else moves.push({ kind: action.kind, beads: [ref] });
+  }
+  return moves;
+}
+
+function buildRow(ctx: Ctx, row: RowInfo, stepOf: Map<number, UnitStep>): StepRow {
+  const { model } = ctx;
+  const sides = new Set<number>();
+  const steps: StepUnit[] = [];
+  row.units.forEach((id, i) => {
+    const unit = model.units[id]!;
+    const next = model.units[row.units[i + 1] ?? -1];
+    for (const p of ['near', 'far'] as const) {
+      const b = unit.places[p];
+      if (b !== null) sides.add(b);
+    }
+    const step = stepOf.get(id);
+    const cue = step?.cue ? cueWords(step.firstPlace, row.heading, model.layout.kind) : undefined;
+    steps.push({
+      number: unit.index,
+      unit: id,
+      mark: unit.mark,
+      ...(cue ? { cue } : {}),
+      round: step ? roundMoves(ctx, step, row.heading) : [],
+      moveOn: (step?.moveOn ?? []).map((b) => beadRef(ctx, b, locate(ctx, b, unit, next))),
+      sideBeads: sides.size,
+    });
+  });
+  return {
+    row: row.row,
+    word: row.word,
+    units: row.units.length,
+    // Counted from the pick-ups printed, so the header always matches the lines below it.
+    beads: steps.reduce((n, s) => n + s.round.filter((m) => m.kind === 'pickup').reduce((k, m) => k + m.beads.length, 0), 0),
+    direction: directionWords(row.heading, row.word),
+    notes: row.notes,
+    steps,
+  };
+}
+
+export function buildSteps(model: Model): StepsDoc {
+  const ctx: Ctx = { model, names: new Map(model.palette.map((p) => [p.key, p.name])) };
+  const stepOf = new Map(model.steps.map((s) => [s.unit, s]));
+  return {
+    schema: 'fourfold.steps/1',
+    title: model.header.title,
+    ...(model.header.designer ? { designer: model.header.designer } : {}),
+    beads: `${model.header.beads.size} ${model.header.beads.shape}`,
+    layout: model.layout.kind,
+    colors: model.palette.map((p) => ({ key: p.key, name: p.name, hex: p.hex })),
+    glossary: glossary(model),
+    notes: model.header.notes,
+    rows: model.rows.map((r) => buildRow(ctx, r, stepOf)),
+  };
+}

@@ -1,0 +1,79 @@
+import { describe, expect, it } from 'vitest';
+import { XMLValidator } from 'fast-xml-parser';
+import { buildSteps } from '../../shared/steps.js';
+import { renderStepsHtml, renderStepsMarkdown, renderStepsText } from '../../shared/steps-render.js';
+import { tally } from '../../shared/tally.js';
+import { stripModel } from './fixture-strip.js';
+
+describe('steps document on a hand-built strip', () => {
+  const model = stripModel();
+  const doc = buildSteps(model);
+  const row = doc.rows[0]!;
+
+  it('has a glossary of the words a beginner might not know, before any row', () => {
+    expect(doc.glossary.map((g) => g.term)).toEqual(['unit', 'pick up', 'pass through', 'side beads', 'cue']);
+    const text = renderStepsText(doc);
+    expect(text.indexOf('pick up:')).toBeLessThan(text.indexOf('Row 1'));
+    // No increase or fresh ring in this piece, so those words are not explained.
+    expect(text).not.toContain('increase');
+  });
+
+  it('gives each row a header whose bead count matches the pick-ups and the tally', () => {
+    const t = tally(model, { beadsPerGram: { low: 100, high: 120 } }).value;
+    expect(row.beads).toBe(t.rows[0]!.beads);
+    expect(row.units).toBe(2);
+    expect(row.direction).toBe('working left to right');
+    expect(row.notes).toEqual(['Leave a long tail.']);
+  });
+
+  it('says where the first bead goes only when the colours differ', () => {
+    expect(row.steps.map((s) => s.cue)).toEqual(['first bead on the right side', 'first bead on top']);
+    const plain = stripModel();
+    plain.steps[1]!.cue = false;
+    expect(buildSteps(plain).rows[0]!.steps[1]!.cue).toBeUndefined();
+  });
+
+  it('names what to pick up and what closes the unit, by key, name and place', () => {
+    const [pick, close] = row.steps[1]!.round;
+    expect(pick!.kind).toBe('pickup');
+    expect(pick!.beads.map((b) => b.key).join('')).toBe('BCA');
+    // Unit 2 is worked right of unit 1, so the bead it shares is on its left.
+    expect(close).toEqual({ kind: 'pass', beads: [{ key: 'A', name: 'chalk', where: 'left side' }] });
+    expect(renderStepsText(doc)).toContain('Pass through the left side (A chalk) to close the unit.');
+  });
+
+  it('counts the side beads the row shows after each unit (strip: units + 1)', () => {
+    expect(row.steps.map((s) => s.sideBeads)).toEqual([2, 3]);
+  });
+
+  it('says what to pass through to move on, from where the needle is', () => {
+    const m = stripModel();
+    m.steps[0]!.moveOn = [1, 0];
+    const moveOn = buildSteps(m).rows[0]!.steps[0]!.moveOn;
+    expect(moveOn.map((b) => b.where)).toEqual(['top', 'right side']);
+    expect(renderStepsText(buildSteps(m))).toContain('To move on, pass through the top (B deep teal), then the right side (A chalk).');
+  });
+
+  it('renders HTML that is well-formed XML, with every text escaped', () => {
+    const html = renderStepsHtml(doc);
+    expect(XMLValidator.validate(html)).toBe(true);
+    // The validator does reject what a browser would silently repair.
+    expect(XMLValidator.validate(html.replace('</dl>', ''))).not.toBe(true);
+    expect(html).toContain('<title>Two &lt;Units&gt; &amp; Co</title>');
+    expect(html).not.toContain('<Units>');
+    expect(html).toContain('garnet &quot;dark&quot;');
+  });
+
+  it('escapes Markdown in names and titles', () => {
+    const m = stripModel();
+    m.palette[1]!.name = '*bold* [link](x)';
+    const out = renderStepsMarkdown(buildSteps(m));
+    expect(out).toContain('\\*bold\\* \\[link\\](x)');
+    expect(out.startsWith('# Two \\<Units\\> \\& Co\n')).toBe(true);
+  });
+
+  it('is plain JSON for --format json', () => {
+    expect(JSON.parse(JSON.stringify(doc))).toEqual(doc);
+    expect(doc.schema).toBe('fourfold.steps/1');
+  });
+});
