@@ -5,6 +5,7 @@
  */
 import { open } from 'node:fs/promises';
 import { resolve } from 'node:path';
+import { fileStart, type Diagnostic } from '../shared/diagnostic.js';
 import type { CliIO } from './command.js';
 
 /** What a diagnostic calls standard input. */
@@ -37,12 +38,15 @@ const REASONS: Record<string, string> = {
   ELOOP: 'too many symbolic links',
 };
 
-/** The one-line message every command prints when it cannot read an input. */
-export function cannotRead(path: string, error: unknown): string {
+/** Why a file operation failed, in words rather than an errno. */
+export function ioReason(error: unknown): string {
   const code = (error as { code?: string } | null)?.code ?? '';
-  const reason = REASONS[code] ?? (error instanceof Error ? error.message : String(error));
-  return `fourfold: cannot read '${displayName(path)}': ${reason}`;
+  return REASONS[code] ?? (error instanceof Error ? error.message : String(error));
 }
+
+/** The one-line message every command prints when it cannot read an input. */
+export const cannotRead = (path: string, error: unknown): string =>
+  `fourfold: cannot read '${displayName(path)}': ${ioReason(error)}`;
 
 export async function readInput(path: string, io: CliIO): Promise<ReadResult> {
   const file = displayName(path);
@@ -66,5 +70,30 @@ export async function readInput(path: string, io: CliIO): Promise<ReadResult> {
     }
   } catch (error) {
     return { error: cannotRead(path, error) };
+  }
+}
+
+export interface PatternText {
+  file: string;
+  text: string;
+  /** Problems with the bytes themselves (not UTF-8 text); the parser reports the rest. */
+  diagnostics: Diagnostic[];
+}
+
+/** A file (or `-`) as text for the parser; a byte-order mark is dropped. */
+export async function readPattern(path: string, io: CliIO): Promise<PatternText | { error: string }> {
+  const input = await readInput(path, io);
+  if ('error' in input) return input;
+  try {
+    return { file: input.file, text: new TextDecoder('utf-8', { fatal: true }).decode(input.bytes), diagnostics: [] };
+  } catch {
+    const diagnostic: Diagnostic = {
+      severity: 'error',
+      id: 'not-text',
+      message: 'this file is not UTF-8 text',
+      range: fileStart,
+      hint: 'save the pattern as plain text in UTF-8 (most editors offer it under "Save as" or "Encoding")',
+    };
+    return { file: input.file, text: new TextDecoder('utf-8').decode(input.bytes), diagnostics: [diagnostic] };
   }
 }
