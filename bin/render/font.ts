@@ -1,0 +1,84 @@
+/**
+ * The bundled JetBrains Mono (from @fontsource/jetbrains-mono, Latin set) for
+ * charts: subsets for embedding in SVG, and whole font files for the PNG
+ * rasteriser, which reads fonts from files only. Everything is cached per
+ * process, since batch conversion renders thousands of charts.
+ */
+import { createHash } from 'node:crypto';
+import { mkdir, readFile, rename, stat, writeFile } from 'node:fs/promises';
+import { createRequire } from 'node:module';
+import { tmpdir } from 'node:os';
+import { dirname, join } from 'node:path';
+import subsetFont from 'subset-font';
+import type { EmbeddedFont } from '../../shared/chart/elements.js';
+
+export const FONT_FAMILY = 'JetBrains Mono';
+const WEIGHTS = [400, 700] as const;
+type Weight = (typeof WEIGHTS)[number];
+
+const require = createRequire(import.meta.url);
+// The package's exports map only names its CSS files, so find the folder through its package.json.
+const fontDir = join(dirname(require.resolve('@fontsource/jetbrains-mono/package.json')), 'files');
+
+const sfntCache = new Map<Weight, Promise<Buffer>>();
+
+/** The whole Latin face as TrueType: subsetting from it is several times faster than from WOFF2. */
+function sfnt(weight: Weight): Promise<Buffer> {
+  let cached = sfntCache.get(weight);
+  if (!cached) {
+    cached = readFile(join(fontDir, `jetbrains-mono-latin-${weight}-normal.woff2`)).then((woff2) =>
+      subsetFont(woff2, '', { keepAllGlyphs: true, targetFormat: 'sfnt' }),
+    );
+    sfntCache.set(weight, cached);
+  }
+  return cached;
+}
+
+const subsetCache = new Map<string, Promise<EmbeddedFont[]>>();
+const SUBSET_CACHE_LIMIT = 256;
+
+/** Both weights subset to `glyphs` (the scene's characters), ready for `sceneToSvg`. */
+export function embeddedFonts(glyphs: string): Promise<EmbeddedFont[]> {
+  let cached = subsetCache.get(glyphs);
+  if (!cached) {
+    // A space keeps the face valid when a chart has no text at all.
+    const text = glyphs.includes(' ') ? glyphs : `${glyphs} `;
+    cached = Promise.all(
+      WEIGHTS.map(async (weight) => ({
+        family: FONT_FAMILY,
+        weight,
+        base64: (await subsetFont(await sfnt(weight), text, { targetFormat: 'sfnt' })).toString('base64'),
+      })),
+    );
+    if (subsetCache.size >= SUBSET_CACHE_LIMIT) subsetCache.delete(subsetCache.keys().next().value as string);
+    subsetCache.set(glyphs, cached);
+  }
+  return cached;
+}
+
+let filesCache: Promise<string[]> | undefined;
+
+/**
+ * The two faces as .ttf files in the temp folder, named by their content hash
+ * so processes and workers share them; written to a temporary name and renamed
+ * so a reader never sees half a file.
+ */
+export function fontFiles(): Promise<string[]> {
+  filesCache ??= Promise.all(
+    WEIGHTS.map(async (weight) => {
+      const bytes = await sfnt(weight);
+      const hash = createHash('sha256').update(bytes).digest('hex').slice(0, 16);
+      const dir = join(tmpdir(), 'fourfold-fonts');
+      const file = join(dir, `jetbrains-mono-${weight}-${hash}.ttf`);
+      const present = await stat(file).then((s) => s.size === bytes.length, () => false);
+      if (!present) {
+        await mkdir(dir, { recursive: true });
+        const temp = `${file}.${process.pid}.${Math.random().toString(36).slice(2)}.tmp`;
+        await writeFile(temp, bytes);
+        await rename(temp, file);
+      }
+      return file;
+    }),
+  );
+  return filesCache;
+}

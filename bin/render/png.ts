@@ -1,0 +1,28 @@
+/**
+ * SVG to PNG with resvg (its native binary ships inside the npm package). The
+ * bundled font is loaded from files and system fonts are not, so a PNG looks
+ * the same on every machine.
+ */
+import { Resvg } from '@resvg/resvg-js';
+import { FONT_FAMILY, fontFiles } from './font.js';
+
+export const DEFAULT_DPI = 192;
+
+/** The chart's width and height are in mm, so `dpi` alone sets the pixel size. */
+export async function svgToPng(svg: string, dpi = DEFAULT_DPI): Promise<Buffer> {
+  const resvg = new Resvg(svg, {
+    dpi,
+    font: {
+      loadSystemFonts: false,
+      fontFiles: await fontFiles(),
+      defaultFontFamily: FONT_FAMILY,
+      monospaceFamily: FONT_FAMILY,
+      sansSerifFamily: FONT_FAMILY,
+      serifFamily: FONT_FAMILY,
+    },
+    shapeRendering: 2,
+    textRendering: 1,
+    logLevel: 'off',
+  });
+  return resvg.render().asPng();
+}

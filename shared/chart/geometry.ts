@@ -1,0 +1,84 @@
+/**
+ * Model coordinates (unit sides, y up) to page millimetres (y down), the
+ * fixed rounding every number in the scene goes through, and unit corners
+ * found from the beads that meet there.
+ */
+import type { Corner, Model, Place, Point, Unit } from '../model.js';
+
+/** Two decimals: 0.01 mm is far below what a printer or a screen shows. */
+export const round2 = (n: number): number => {
+  const r = Math.round(n * 100) / 100;
+  return Object.is(r, -0) ? 0 : r;
+};
+
+export interface PageTransform {
+  /** mm per unit side. */
+  scale: number;
+  /** Page position of the model's (minX, maxY) corner. */
+  left: number;
+  top: number;
+  minX: number;
+  maxY: number;
+}
+
+export const toPage = (t: PageTransform, p: Point): Point => ({
+  x: t.left + (p.x - t.minX) * t.scale,
+  y: t.top + (t.maxY - p.y) * t.scale,
+});
+
+export const pointPath = (points: readonly Point[], closed: boolean): string =>
+  points.map((p, i) => `${i === 0 ? 'M' : 'L'}${round2(p.x)} ${round2(p.y)}`).join(' ') + (closed ? ' Z' : '');
+
+const cornerPlaces = (corner: Corner): [Place, Place] => corner.split('|') as [Place, Place];
+
+export const corners: readonly Corner[] = ['base|far', 'far|top', 'top|near', 'near|base'];
+
+/** The junction where the unit's beads at the corner's two places meet, if both are there. */
+export function cornerJunction(model: Model, unit: Unit, corner: Corner): number | null {
+  const [a, b] = cornerPlaces(corner).map((place) => unit.places[place]);
+  if (a === null || a === undefined || b === null || b === undefined) return null;
+  const ja = model.beads[a]?.junctions;
+  const jb = model.beads[b]?.junctions;
+  if (!ja || !jb) return null;
+  return ja.find((j) => jb.includes(j)) ?? null;
+}
+
+/**
+ * The cell outline in model coordinates: the four corner junctions when every
+ * place is built, else a unit square turned by the unit's angle (a failed unit).
+ */
+export function cellOutline(model: Model, unit: Unit): Point[] {
+  const found = corners.map((c) => cornerJunction(model, unit, c));
+  if (found.every((j) => j !== null)) {
+    return found.map((j) => {
+      const junction = model.junctions[j as number]!;
+      return { x: junction.x, y: junction.y };
+    });
+  }
+  const rad = (unit.angle * Math.PI) / 180;
+  const cos = Math.cos(rad);
+  const sin = Math.sin(rad);
+  return [
+    [0.5, -0.5],
+    [0.5, 0.5],
+    [-0.5, 0.5],
+    [-0.5, -0.5],
+  ].map(([dx, dy]) => ({ x: unit.x + dx! * cos - dy! * sin, y: unit.y + dx! * sin + dy! * cos }));
+}
+
+export const unitVector = (from: Point, to: Point): Point => {
+  const dx = to.x - from.x;
+  const dy = to.y - from.y;
+  const len = Math.hypot(dx, dy);
+  return len === 0 ? { x: 1, y: 0 } : { x: dx / len, y: dy / len };
+};
+
+/** A triangle with its tip at `tip`, pointing along the unit vector `dir`. */
+export function arrowhead(tip: Point, dir: Point, size: number): string {
+  const back = { x: tip.x - dir.x * size, y: tip.y - dir.y * size };
+  const half = size * 0.55;
+  return pointPath(
+    [tip, { x: back.x - dir.y * half, y: back.y + dir.x * half }, { x: back.x + dir.y * half, y: back.y - dir.x * half }],
+    true,
+  );
+}

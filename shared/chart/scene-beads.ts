@@ -1,0 +1,150 @@
+/**
+ * The piece itself: unit cells, bead capsules with their key letters, cue
+ * arrowheads, failed-unit marks and unit numbers.
+ */
+import type { Model, Unit, UnitStep } from '../model.js';
+import { labelColor } from './contrast.js';
+import { arrowhead, cellOutline, cornerJunction, pointPath, round2, toPage, unitVector, type PageTransform } from './geometry.js';
+import type { BeadPrim, PathPrim, TextPrim } from './scene-types.js';
+import type { Theme } from './themes.js';
+
+/** Capsule thickness as a share of a unit side: thin enough to leave the cell's hole open. */
+export const BEAD_THICKNESS = 0.36;
+/** Cap height of the font as a share of its size (JetBrains Mono: 730/1000, from memory). */
+export const CAP_HEIGHT = 0.73;
+
+export function cells(model: Model, t: PageTransform, theme: Theme): PathPrim[] {
+  if (theme.cell === null) return [];
+  return model.units.map((unit) => ({
+    kind: 'path',
+    id: `ff-cell-${unit.id}`,
+    role: 'cell',
+    d: pointPath(cellOutline(model, unit).map((p) => toPage(t, p)), true),
+    fill: theme.cell,
+    stroke: null,
+    strokeWidth: 0,
+    data: { unit: unit.id, row: unit.row },
+  }));
+}
+
+export function beads(model: Model, t: PageTransform, theme: Theme): BeadPrim[] {
+  const hex = new Map(model.palette.map((p) => [p.key, p.hex]));
+  const thickness = round2(BEAD_THICKNESS * t.scale);
+  return model.beads.map((bead) => {
+    const fill = hex.get(bead.color) ?? '#808080';
+    const centre = toPage(t, bead);
+    const length = round2(bead.length * t.scale);
+    const unit = model.units[bead.units[0] ?? 0];
+    const size = round2(thickness * 0.8);
+    const prim: BeadPrim = {
+      kind: 'bead',
+      id: `ff-bead-${bead.id}`,
+      bead: bead.id,
+      unit: unit?.id ?? 0,
+      row: unit?.row ?? 0,
+      x: round2(centre.x),
+      y: round2(centre.y),
+      // The model turns counter-clockwise with y up; the page has y down.
+      angle: round2(-bead.angle),
+      length,
+      thickness,
+      fill,
+      stroke: theme.beadStroke,
+      strokeWidth: theme.beadStrokeWidth,
+      gap: bead.gap === true,
+    };
+    // A letter needs about one em along the bead; gap beads are often shorter.
+    if (length >= thickness * 1.3) {
+      prim.label = { text: bead.color, color: labelColor(fill), size, x: prim.x, y: round2(centre.y + (size * CAP_HEIGHT) / 2) };
+    }
+    return prim;
+  });
+}
+
+/** An arrowhead inside the cell by the start corner, pointing along the first new bead. */
+function cue(model: Model, unit: Unit, step: UnitStep, t: PageTransform, theme: Theme): PathPrim | null {
+  const junction = cornerJunction(model, unit, step.startCorner);
+  const first = unit.places[step.firstPlace];
+  if (junction === null || first === null) return null;
+  const bead = model.beads[first];
+  const corner = model.junctions[junction];
+  if (!bead || !corner) return null;
+  const other = model.junctions[bead.junctions[0] === junction ? bead.junctions[1] : bead.junctions[0]];
+  if (!other) return null;
+  const c = toPage(t, corner);
+  const along = unitVector(c, toPage(t, other));
+  const centre = toPage(t, unit);
+  // Step off the bead toward the cell's middle, so the mark never covers a bead.
+  const toMid = { x: centre.x - c.x, y: centre.y - c.y };
+  const dot = toMid.x * along.x + toMid.y * along.y;
+  const inward = unitVector({ x: 0, y: 0 }, { x: toMid.x - dot * along.x, y: toMid.y - dot * along.y });
+  const size = 0.17 * t.scale;
+  const tip = {
+    x: c.x + inward.x * 0.3 * t.scale + along.x * (0.2 * t.scale + size),
+    y: c.y + inward.y * 0.3 * t.scale + along.y * (0.2 * t.scale + size),
+  };
+  return {
+    kind: 'path',
+    id: `ff-cue-${unit.id}`,
+    role: 'cue',
+    d: arrowhead(tip, along, size),
+    fill: theme.cue,
+    stroke: null,
+    strokeWidth: 0,
+    data: { unit: unit.id, row: unit.row },
+  };
+}
+
+export function cues(model: Model, t: PageTransform, theme: Theme): PathPrim[] {
+  const out: PathPrim[] = [];
+  for (const step of model.steps) {
+    const unit = model.units[step.unit];
+    if (!step.cue || !unit || unit.failed) continue;
+    const prim = cue(model, unit, step, t, theme);
+    if (prim) out.push(prim);
+  }
+  return out;
+}
+
+/** A failed unit: its cell outlined and crossed in the failure colour. */
+export function failures(model: Model, t: PageTransform, theme: Theme): PathPrim[] {
+  return model.units
+    .filter((unit) => unit.failed)
+    .map((unit) => {
+      const [a, b, c, d] = cellOutline(model, unit).map((p) => toPage(t, p));
+      return {
+        kind: 'path',
+        id: `ff-failed-${unit.id}`,
+        role: 'failed',
+        d: `${pointPath([a!, b!, c!, d!], true)} ${pointPath([a!, c!], false)} ${pointPath([b!, d!], false)}`,
+        fill: null,
+        stroke: theme.failed,
+        strokeWidth: round2(Math.max(0.3, 0.06 * t.scale)),
+        dash: `${round2(0.12 * t.scale)} ${round2(0.06 * t.scale)}`,
+        data: { unit: unit.id, row: unit.row },
+      };
+    });
+}
+
+/** Unit numbers (1-based in the row) in each cell's hole; `skipFirst` leaves room for a round's number. */
+export function unitNumbers(model: Model, t: PageTransform, theme: Theme, skipFirst: boolean): TextPrim[] {
+  const size = round2(0.24 * t.scale);
+  return model.units
+    .filter((unit) => !(skipFirst && unit.index === 1))
+    .map((unit) => {
+      const p = toPage(t, unit);
+      return {
+        kind: 'text',
+        id: `ff-unit-${unit.id}`,
+        role: 'unit-number',
+        x: round2(p.x),
+        y: round2(p.y + (size * CAP_HEIGHT) / 2),
+        size,
+        text: String(unit.index),
+        color: theme.muted,
+        anchor: 'middle',
+        bold: false,
+        data: { unit: unit.id, row: unit.row },
+      };
+    });
+}

@@ -1,0 +1,88 @@
+/**
+ * The thread path of one row, drawn over the beads: one segment per bead
+ * pass, told apart by line style (pick-up solid, closing dashed, positioning
+ * dotted) as well as colour so the print theme keeps them apart, and
+ * numbered in the order the thread makes them.
+ */
+import type { Diagnostic, Result } from '../diagnostic.js';
+import { fileStart } from '../diagnostic.js';
+import type { Model, PassKind, Point } from '../model.js';
+import { pointPath, round2, toPage, type PageTransform } from './geometry.js';
+import { CAP_HEIGHT } from './scene-beads.js';
+import type { Primitive } from './scene-types.js';
+import type { Theme } from './themes.js';
+
+const dashFor = (kind: PassKind, scale: number): string | undefined =>
+  kind === 'pickup' ? undefined : kind === 'close' ? `${round2(0.1 * scale)} ${round2(0.05 * scale)}` : `${round2(0.03 * scale)} ${round2(0.05 * scale)}`;
+
+/** The bead's two ends on the page, the `from` end first. */
+function ends(model: Model, beadId: number, from: number, t: PageTransform): [Point, Point] | null {
+  const bead = model.beads[beadId];
+  const start = model.junctions[from];
+  if (!bead || !start) return null;
+  const rad = (bead.angle * Math.PI) / 180;
+  const half = bead.length / 2;
+  const a = { x: bead.x - Math.cos(rad) * half, y: bead.y - Math.sin(rad) * half };
+  const b = { x: bead.x + Math.cos(rad) * half, y: bead.y + Math.sin(rad) * half };
+  const nearA = Math.hypot(a.x - start.x, a.y - start.y) <= Math.hypot(b.x - start.x, b.y - start.y);
+  return nearA ? [toPage(t, a), toPage(t, b)] : [toPage(t, b), toPage(t, a)];
+}
+
+export function threadOverlay(model: Model, row: number, t: PageTransform, theme: Theme): Result<Primitive[]> {
+  const info = model.rows.find((r) => r.row === row);
+  if (!info) {
+    const diagnostic: Diagnostic = {
+      severity: 'error',
+      id: 'thread-row',
+      message: `--thread ${row}: the pattern has no row ${row} (it has rows 1 to ${model.rows.length}).`,
+      range: fileStart,
+    };
+    return { value: [], diagnostics: [diagnostic] };
+  }
+  const units = new Set(info.units);
+  const passes = model.thread.filter((p) => units.has(p.unit));
+  const seen = new Map<number, number>();
+  const width = round2(Math.max(0.25, 0.05 * t.scale));
+  const size = round2(Math.max(1.2, 0.16 * t.scale));
+  const out: Primitive[] = [];
+  passes.forEach((pass, i) => {
+    const e = ends(model, pass.bead, pass.from, t);
+    if (!e) return;
+    // A bead passed more than once gets each later pass beside the earlier ones.
+    const k = seen.get(pass.bead) ?? 0;
+    seen.set(pass.bead, k + 1);
+    const [a, b] = e;
+    const len = Math.hypot(b.x - a.x, b.y - a.y) || 1;
+    const shift = (k % 2 === 0 ? 1 : -1) * Math.ceil(k / 2) * 0.08 * t.scale;
+    const n = { x: (-(b.y - a.y) / len) * shift, y: ((b.x - a.x) / len) * shift };
+    const from = { x: a.x + n.x, y: a.y + n.y };
+    const to = { x: b.x + n.x, y: b.y + n.y };
+    const data = { unit: pass.unit, pass: i + 1, kind: pass.kind };
+    const dash = dashFor(pass.kind, t.scale);
+    out.push({
+      kind: 'path',
+      id: `ff-thread-${i + 1}`,
+      role: 'thread',
+      d: pointPath([from, to], false),
+      fill: null,
+      stroke: theme.thread[pass.kind],
+      strokeWidth: width,
+      ...(dash === undefined ? {} : { dash }),
+      data,
+    });
+    out.push({
+      kind: 'text',
+      id: `ff-thread-${i + 1}-n`,
+      role: 'thread-number',
+      x: round2((from.x + to.x) / 2 + n.x * 0.5),
+      y: round2((from.y + to.y) / 2 + n.y * 0.5 + (size * CAP_HEIGHT) / 2),
+      size,
+      text: String(i + 1),
+      color: theme.thread[pass.kind],
+      anchor: 'middle',
+      bold: true,
+      data,
+    });
+  });
+  return { value: out, diagnostics: [] };
+}

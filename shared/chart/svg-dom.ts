@@ -1,0 +1,54 @@
+/**
+ * Scene to a live SVG drawn with svg.js, for the web app's interactive
+ * chart. It walks the same element tree as the text emitter (elements.ts),
+ * so the drawing holds the same elements, ids and attributes; a parity test
+ * checks that on svgdom. The DOM comes from the container the caller passes.
+ */
+import { SVG, type Dom, type Svg } from '@svgdotjs/svg.js';
+import { rootAttrs, sceneChildren, type EmbeddedFont, type SvgNode } from './elements.js';
+import type { Scene } from './scene-types.js';
+
+/** Added to every element of the highlighted unit (its cell, beads, cue and number). */
+export const HIGHLIGHT_CLASS = 'ff-highlight';
+
+export interface ChartHandle {
+  svg: Svg;
+  /** The element carrying `data-bead` for that bead id. */
+  bead(id: number): Dom | null;
+  /** Elements that belong to a unit (cell, beads it picked up, cue, number, failure mark). */
+  unitElements(unit: number): Dom[];
+  /** Marks one unit (or none, with null); the previous one is cleared. */
+  highlightUnit(unit: number | null): void;
+  remove(): void;
+}
+
+function draw(parent: Svg | Dom, node: SvgNode): void {
+  const el = parent.element(node.tag);
+  for (const [name, value] of node.attrs) el.attr(name, value);
+  if (node.text !== undefined) el.words(node.text);
+  for (const child of node.children ?? []) draw(el, child);
+}
+
+export function drawScene(scene: Scene, container: Parameters<Svg['addTo']>[0], fonts: readonly EmbeddedFont[] = []): ChartHandle {
+  const svg = SVG().addTo(container);
+  // svg.js declares its own namespaces on a new root; the chart uses none of them.
+  svg.attr('xmlns:svgjs', null).attr('xmlns:xlink', null).attr('version', null);
+  for (const [name, value] of rootAttrs(scene)) svg.attr(name, value);
+  for (const node of sceneChildren(scene, fonts)) draw(svg, node);
+
+  const query = (selector: string): Dom[] => svg.find(selector).map((el) => el as Dom);
+  let highlighted: number | null = null;
+  const unitElements = (unit: number): Dom[] => query(`[data-unit="${unit}"]`);
+
+  return {
+    svg,
+    bead: (id) => query(`[data-bead="${id}"]`)[0] ?? null,
+    unitElements,
+    highlightUnit(unit) {
+      if (highlighted !== null) for (const el of unitElements(highlighted)) el.removeClass(HIGHLIGHT_CLASS);
+      highlighted = unit;
+      if (unit !== null) for (const el of unitElements(unit)) el.addClass(HIGHLIGHT_CLASS);
+    },
+    remove: () => void svg.remove(),
+  };
+}
