@@ -1,0 +1,83 @@
+/**
+ * The Express app, built without listening so tests and the bench drive it
+ * directly. Routes check the caller's role first (403), then whether the
+ * pattern is visible to them (404).
+ */
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import express, { Router, type Express } from 'express';
+import helmet from 'helmet';
+import type { AppDeps } from './context.js';
+import { allow, bearer } from './auth.js';
+import { apiNotFound, errorHandler, notFound } from './errors.js';
+import { authRoutes } from './routes/auth.js';
+import { checkRoutes } from './routes/check.js';
+import { feedbackRoutes } from './routes/feedback.js';
+import { patternRoutes } from './routes/patterns.js';
+import { sharingRoutes } from './routes/sharing.js';
+import { tokenRoutes } from './routes/tokens.js';
+import { userRoutes } from './routes/users.js';
+import { sharedRoutes, viewRoutes } from './routes/views.js';
+
+function apiRouter(deps: AppDeps): Router {
+  const api = Router();
+  api.get('/health', (_req, res) => {
+    res.json({ ok: true });
+  });
+  api.use('/auth', authRoutes(deps));
+  api.use('/shared', sharedRoutes(deps));
+  api.use(bearer(deps.db.models));
+  api.use('/check', checkRoutes(deps));
+  api.use('/patterns', patternRoutes(deps), viewRoutes(deps), sharingRoutes(deps), feedbackRoutes(deps));
+  api.use('/tokens', tokenRoutes(deps));
+  api.use('/users', allow('admin'), userRoutes(deps));
+  api.get('/dev/outbox', allow('admin'), (_req, res) => {
+    const items = deps.production ? null : deps.mailer.outbox();
+    if (!items) throw notFound('There is no outbox: mail goes to a real host.');
+    res.json({ items });
+  });
+  api.use(apiNotFound);
+  return api;
+}
+
+export function createApp(deps: AppDeps): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.set('query parser', 'simple');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: false,
+        directives: {
+          defaultSrc: ["'self'"],
+          scriptSrc: ["'self'"],
+          // The chart view sets element styles from script; no inline <style> or style="" in markup is needed.
+          styleSrc: ["'self'"],
+          styleSrcAttr: ["'unsafe-inline'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          objectSrc: ["'none'"],
+          baseUri: ["'self'"],
+          formAction: ["'self'"],
+          frameAncestors: ["'none'"],
+        },
+      },
+      crossOriginEmbedderPolicy: false,
+    }),
+  );
+  app.use('/api', express.json({ limit: '2mb' }), apiRouter(deps));
+  const { webDir } = deps;
+  if (webDir && existsSync(join(webDir, 'index.html'))) {
+    app.use(express.static(webDir, { index: 'index.html', maxAge: '1h' }));
+    // SPA fallback: any other GET that wants a page gets the app, which routes on the client.
+    app.use((req, res, next) => {
+      if (req.method !== 'GET' || !req.accepts('html')) return next();
+      res.setHeader('Cache-Control', 'no-cache');
+      res.sendFile(join(webDir, 'index.html'));
+    });
+  }
+  app.use(errorHandler(deps.log ?? ((error) => console.error(error))));
+  return app;
+}

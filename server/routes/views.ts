@@ -1,0 +1,68 @@
+/**
+ * The derived views of one version (chart, tally, steps, kit, model), for a
+ * signed-in viewer and, without sign-in, for a valid share link.
+ */
+import { Router, type Response } from 'express';
+import { z } from 'zod';
+import type { AppDeps } from '../context.js';
+import { auth } from '../auth.js';
+import { findVersion, sharingOf, visiblePattern } from '../access.js';
+import type { Model } from '../../shared/model.js';
+import type { PatternInstance } from '../models/pattern.js';
+import { renderView, type ViewKind } from '../render.js';
+import { toDetail } from '../serialize.js';
+import { check, idParams, versionQuery } from '../validate.js';
+import { sharedPatternId } from './sharing.js';
+
+const VIEWS: ViewKind[] = ['chart.svg', 'chart.png', 'tally', 'steps', 'kit', 'model'];
+const SHARED_VIEWS: ViewKind[] = ['chart.svg', 'chart.png', 'tally', 'steps'];
+const sharedParams = z.object({ token: z.string().max(100) });
+
+async function send(res: Response, deps: AppDeps, pattern: PatternInstance, kind: ViewKind, query: Record<string, unknown>) {
+  const { version } = check(versionQuery, { version: query.version });
+  const shown = await findVersion(deps.db.models, pattern, version);
+  const model = shown.model ? (JSON.parse(shown.model) as Model) : null;
+  const out = await renderView(kind, model, query);
+  if (kind === 'chart.svg') {
+    // A chart is data, never a document that may run script or be sniffed as HTML.
+    res.setHeader('Content-Security-Policy', 'sandbox');
+  }
+  res.setHeader('X-Content-Type-Options', 'nosniff');
+  res.type(out.type).send(out.body);
+}
+
+export function viewRoutes(deps: AppDeps): Router {
+  const { models } = deps.db;
+  const router = Router();
+  for (const kind of VIEWS) {
+    router.get(`/:id/${kind}`, async (req, res) => {
+      const { id } = check(idParams, req.params);
+      const { pattern } = await visiblePattern(models, auth(res), id);
+      await send(res, deps, pattern, kind, req.query as Record<string, unknown>);
+    });
+  }
+  return router;
+}
+
+export function sharedRoutes(deps: AppDeps): Router {
+  const { models } = deps.db;
+  const router = Router();
+  const sharedPattern = async (token: string) => {
+    const id = await sharedPatternId(deps, token);
+    return (await models.Pattern.findByPk(id, { include: [{ model: models.User, as: 'owner' }] }))!;
+  };
+  router.get('/:token', async (req, res) => {
+    const { token } = check(sharedParams, req.params);
+    const pattern = await sharedPattern(token);
+    const shown = await findVersion(models, pattern);
+    const sharing = await sharingOf(models, [pattern.id]);
+    res.json(toDetail(pattern, shown, sharing.get(pattern.id)!, 'share'));
+  });
+  for (const kind of SHARED_VIEWS) {
+    router.get(`/:token/${kind}`, async (req, res) => {
+      const { token } = check(sharedParams, req.params);
+      await send(res, deps, await sharedPattern(token), kind, req.query as Record<string, unknown>);
+    });
+  }
+  return router;
+}
