@@ -20,6 +20,8 @@ export interface HeaderEntry {
   range: SourceRange;
   keyRange: SourceRange;
   valueRange: SourceRange;
+  /** Comments on their own lines just above this line, kept by `fmt`. */
+  leadingComments?: Comment[];
 }
 
 export interface ColorDef {
@@ -32,6 +34,8 @@ export interface ColorDef {
   range: SourceRange;
   keyRange: SourceRange;
   colorRange: SourceRange;
+  /** Comments on their own lines just above this line, kept by `fmt`. */
+  leadingComments?: Comment[];
 }
 
 export type Mark = '' | '*' | '+';
@@ -61,6 +65,8 @@ export type ItemNode = UnitNode | SkipNode | GroupNode;
 export interface NoteNode {
   text: string;
   range: SourceRange;
+  /** Comments on their own lines just above this note, kept by `fmt`. */
+  leadingComments?: Comment[];
 }
 
 export interface RowNode {
@@ -100,4 +106,10 @@ export interface PatternAst {
   rows: RowNode[];
   /** Every comment in the file, in order, for tools that need them all. */
   comments: Comment[];
+  /** Comments before the first line of the file that is not a comment. */
+  headComments?: Comment[];
+  /** Comments just above the `colors:` line. */
+  colorsComments?: Comment[];
+  /** Comments after the last line that is not a comment. */
+  tailComments?: Comment[];
 }

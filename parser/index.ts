@@ -1,0 +1,92 @@
+/**
+ * The parser's public API: text or bytes in, a pattern AST and every
+ * diagnostic out. Nothing here throws on user input.
+ */
+import { fileStart, sortDiagnostics, type Diagnostic, type Result } from '../shared/diagnostic.js';
+import type { PatternAst } from './ast.js';
+import { checkPattern } from './checks.js';
+import { parseTokens } from './grammar.js';
+import { lex } from './lexer.js';
+import { guardNesting, lineDiagnostics, MAX_BYTES, sizeDiagnostic, unitLimitDiagnostic, utf8Length } from './limits.js';
+import { LineIndex } from './positions.js';
+import { toAst } from './to-ast.js';
+
+export type * from './ast.js';
+export { expandRow, type FlatItem } from './expand.js';
+export { format } from './format.js';
+export { countItems, MAX_BYTES, MAX_LINE, UNIT_LIMIT } from './limits.js';
+export { LineIndex } from './positions.js';
+
+/** An AST with nothing in it, for input that is refused before it is read. */
+export function emptyAst(): PatternAst {
+  return {
+    header: { title: '', beads: { size: '11/0', shape: 'round' }, layout: 'flat', order: 'pickup', entries: [] },
+    colors: [],
+    notes: [],
+    rows: [],
+    comments: [],
+  };
+}
+
+export function parse(text: string): Result<PatternAst> {
+  try {
+    return parseText(text);
+  } catch (e) {
+    // A bug of ours, not the user's: say so plainly rather than crash the caller.
+    return { value: emptyAst(), diagnostics: [internalError(e)] };
+  }
+}
+
+function parseText(input: string): Result<PatternAst> {
+  // A byte-order mark is not content; a space keeps every offset pointing at the caller's string.
+  const text = input.charCodeAt(0) === 0xfeff ? ` ${input.slice(1)}` : input;
+  const ix = new LineIndex(text);
+  const size = text.length * 3 <= MAX_BYTES ? undefined : sizeDiagnostic(utf8Length(text), ix);
+  const refused = size ? [size] : lineDiagnostics(text, ix);
+  if (refused.length > 0) return { value: emptyAst(), diagnostics: refused };
+
+  const lexed = lex(text, ix);
+  const guarded = guardNesting(lexed.tokens, ix);
+  const parsed = parseTokens(guarded.tokens);
+  const ast = toAst(parsed.cst, ix, lexed.comments);
+  const tooLarge = unitLimitDiagnostic(ast.value);
+  const diagnostics: Diagnostic[] = [
+    ...lexed.diagnostics,
+    ...guarded.diagnostics,
+    ...parsed.errors.map((e): Diagnostic => ({
+      severity: 'error',
+      id: 'syntax',
+      message: `'${e.token.image}' was not expected here`,
+      range: ix.range(e.token.startOffset, e.token.startOffset + e.token.image.length),
+    })),
+    ...ast.diagnostics,
+    ...(tooLarge ? [tooLarge] : checkPattern(ast.value)),
+  ];
+  return { value: ast.value, diagnostics: sortDiagnostics(diagnostics) };
+}
+
+export function parseBytes(bytes: Uint8Array): Result<PatternAst> {
+  if (bytes.length > MAX_BYTES) {
+    const d = sizeDiagnostic(bytes.length, new LineIndex(''))!;
+    return { value: emptyAst(), diagnostics: [d] };
+  }
+  const nul = bytes.indexOf(0);
+  if (nul !== -1) return notText(`this file holds binary data (a zero byte at byte ${nul + 1}), not a text pattern`);
+  let text: string;
+  try {
+    text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+  } catch {
+    return notText('this file is not UTF-8 text');
+  }
+  return parse(text);
+}
+
+const notText = (message: string): Result<PatternAst> => ({
+  value: emptyAst(),
+  diagnostics: [{ severity: 'error', id: 'not-text', message, range: fileStart, hint: 'a pattern is a plain UTF-8 text file (.ffp); save it as UTF-8 from your editor' }],
+});
+
+function internalError(e: unknown): Diagnostic {
+  const what = e instanceof Error ? e.message : String(e);
+  return { severity: 'error', id: 'internal', message: `Fourfold could not read this file because of a fault of its own (${what})`, range: fileStart, hint: 'please report this, with the file' };
+}

@@ -1,0 +1,26 @@
+/** Did-you-mean suggestions, shared by every check that meets a word it does not know. */
+import { distance } from 'fastest-levenshtein';
+
+/**
+ * The closest candidate, if it is close enough to be a plausible typo: at most
+ * two edits, and fewer than half the word's letters (so `xy` does not become `row`).
+ */
+export function closest(word: string, candidates: Iterable<string>): string | undefined {
+  const w = word.toLowerCase();
+  let best: string | undefined;
+  let bestDistance = Infinity;
+  for (const c of candidates) {
+    const d = distance(w, c.toLowerCase());
+    if (d < bestDistance) {
+      best = c;
+      bestDistance = d;
+    }
+  }
+  return best !== undefined && bestDistance > 0 && bestDistance <= Math.min(2, Math.ceil(w.length / 2)) ? best : undefined;
+}
+
+/** " Did you mean 'x'?" or nothing, to append to a message. */
+export const didYouMean = (word: string, candidates: Iterable<string>): string => {
+  const c = closest(word, candidates);
+  return c === undefined ? '' : ` Did you mean '${c}'?`;
+};

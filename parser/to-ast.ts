@@ -1,0 +1,358 @@
+/**
+ * CST to AST: a Chevrotain visitor that turns each line into a node with a
+ * source range, then places the lines (header, colours, notes, rows) and
+ * attaches comments. Problems only the shape of a line shows (a missing row
+ * number or ':', an unclosed group, a lower-case key) are reported here.
+ */
+import type { CstElement, CstNode, IToken } from 'chevrotain';
+import type { Diagnostic, Result, SourceRange } from '../shared/diagnostic.js';
+import type { ColorDef, Comment, GroupNode, HeaderEntry, ItemNode, NoteNode, PatternAst, RowNode } from './ast.js';
+import { parser } from './grammar.js';
+import { span, type LineIndex } from './positions.js';
+import { didYouMean } from './suggest.js';
+import { badColor, colorHex, COLORS_KEYS, HEADER_KEYS, NOTE_KEY, readHeader, ROW_WORDS } from './values.js';
+
+type Children = Record<string, CstElement[] | undefined>;
+
+interface KeyLine {
+  kind: 'key';
+  key: string;
+  keyRange: SourceRange;
+  value: string;
+  valueRange: SourceRange;
+  range: SourceRange;
+}
+interface ColorLine {
+  kind: 'color';
+  word: string;
+  wordRange: SourceRange;
+  text: string;
+  textOffset: number;
+  range: SourceRange;
+}
+interface RowLine {
+  kind: 'row';
+  row: RowNode;
+  /** Where the line's content ends (its newline), to tell trailing comments from leading ones. */
+  end: number;
+}
+type Line = KeyLine | ColorLine | RowLine;
+
+/** One past the token's last code unit. */
+const endOf = (t: IToken): number => t.startOffset + t.image.length;
+const tokens = (ctx: Children, name: string): IToken[] => (ctx[name] as IToken[] | undefined) ?? [];
+const nodes = (ctx: Children, name: string): CstNode[] => (ctx[name] as CstNode[] | undefined) ?? [];
+/** Tokens inserted by error recovery have no text behind them. */
+const real = (t: IToken | undefined): t is IToken => t !== undefined && !t.isInsertedInRecovery && !Number.isNaN(t.startOffset);
+
+const BaseVisitor = parser.getBaseCstVisitorConstructor();
+
+class AstBuilder extends BaseVisitor {
+  readonly diagnostics: Diagnostic[] = [];
+
+  constructor(private readonly ix: LineIndex) {
+    super();
+    this.validateVisitor();
+  }
+
+  private range(t: IToken): SourceRange {
+    return this.ix.range(t.startOffset, endOf(t));
+  }
+
+  private error(range: SourceRange, message: string, hint?: string, id = 'syntax'): void {
+    this.diagnostics.push(hint === undefined ? { severity: 'error', id, message, range } : { severity: 'error', id, message, range, hint });
+  }
+
+  pattern(ctx: Children): Line[] {
+    const text = nodes(ctx, 'textLine');
+    const rows = nodes(ctx, 'rowLine');
+    const all = text.length === 0 || rows.length === 0 ? [...text, ...rows] : mergeByOffset(text, rows);
+    const lines: Line[] = [];
+    for (const n of all) {
+      const line = this.visit(n) as Line | undefined;
+      if (line) lines.push(line);
+    }
+    return lines;
+  }
+
+  textLine(ctx: Children): Line | undefined {
+    const head = tokens(ctx, 'HeaderKey')[0] ?? tokens(ctx, 'ColorKey')[0];
+    if (!real(head)) return undefined;
+    const textTok = tokens(ctx, 'Text')[0];
+    const raw = real(textTok) ? textTok.image : '';
+    const textOffset = real(textTok) ? textTok.startOffset : endOf(head);
+    const lineEnd = textOffset + raw.length;
+    const range = this.ix.range(head.startOffset, lineEnd - (raw.length - raw.trimEnd().length));
+    if (head.tokenType.name === 'ColorKey') {
+      return { kind: 'color', word: head.image, wordRange: this.range(head), text: raw, textOffset, range };
+    }
+    const key = head.image.slice(0, -1).trim();
+    const lead = raw.length - raw.trimStart().length;
+    const value = raw.trim();
+    return {
+      kind: 'key',
+      key: key.toLowerCase(),
+      keyRange: this.ix.range(head.startOffset, head.startOffset + key.length),
+      value,
+      valueRange: this.ix.range(textOffset + lead, textOffset + lead + value.length),
+      range,
+    };
+  }
+
+  rowLine(ctx: Children): Line | undefined {
+    const start = tokens(ctx, 'RowStart')[0];
+    if (!real(start)) return undefined;
+    const startRange = this.range(start);
+    const w = start.image.toLowerCase();
+    if (!(ROW_WORDS as readonly string[]).includes(w)) {
+      this.error(startRange, `'${start.image}' is not a word the notation knows.${didYouMean(w, ROW_WORDS)}`, "a row starts with 'row N:' or 'round N:'");
+    }
+    const [n1, n2] = tokens(ctx, 'RowNumber').filter(real);
+    const colon = tokens(ctx, 'Colon').find(real);
+    let last = n2 ?? n1 ?? start;
+    const label = `${start.image}${n1 ? ` ${n1.image}${n2 ? `-${n2.image}` : ''}` : ''}`;
+    if (!n1) this.error(this.ix.range(endOf(start), endOf(start)), `expected a row number after '${start.image}'`, "write it like 'row 3: AB CB'");
+    if (!colon) this.error(this.ix.range(endOf(last), endOf(last)), `expected ':' after '${label}'`, `write '${label}: ' before the units`);
+    if (colon) last = colon;
+    const items: ItemNode[] = [];
+    for (const body of nodes(ctx, 'body')) items.push(...(this.visit(body) as ItemNode[]));
+    for (const stray of tokens(ctx, 'RParen').filter(real)) {
+      this.error(this.range(stray), "this ')' closes no group", "open the group with '(' before its units, like '(AB CB)x2'");
+    }
+    const numberRange = n1 ? span(this.range(n1), this.range(n2 ?? n1)) : this.ix.range(endOf(start), endOf(start));
+    const lastItem = items[items.length - 1];
+    const endRange = lastItem && lastItem.range.endOffset > endOf(last) ? lastItem.range : this.range(last);
+    if (items.length === 0) {
+      this.error(
+        this.ix.range(endOf(last), endOf(last)),
+        `expected a colour key (A-Z), a group '(' or a skip '-' after '${label}:'`,
+        "a row lists its units, like 'row 2: *AAAA BA +AAA'",
+      );
+    }
+    const from = n1 ? Number(n1.image) : 0;
+    const lineEnd = tokens(ctx, 'LineEnd')[0];
+    const row: RowNode = {
+      word: w.startsWith('round') ? 'round' : 'row',
+      from,
+      to: n2 ? Number(n2.image) : from,
+      items,
+      notes: [],
+      range: span(startRange, endRange),
+      numberRange,
+      leadingComments: [],
+    };
+    return { kind: 'row', row, end: real(lineEnd) ? lineEnd.startOffset : row.range.endOffset };
+  }
+
+  body(ctx: Children): ItemNode[] {
+    const toks = tokens(ctx, 'BodyToken');
+    const groups = nodes(ctx, 'group');
+    const items: ItemNode[] = [];
+    const ordered = groups.length === 0 ? toks : mergeByOffset<IToken | CstNode>(toks, groups);
+    for (const el of ordered) {
+      const item = 'image' in el ? this.bodyToken(el) : (this.visit(el) as GroupNode | undefined);
+      if (item) items.push(item);
+    }
+    return items;
+  }
+
+  private bodyToken(t: IToken): ItemNode | undefined {
+    if (!real(t)) return undefined;
+    const range = this.range(t);
+    switch (t.tokenType.name) {
+      case 'Dash':
+        return { type: 'skip', range };
+      case 'Unit':
+        return this.unit(t.image, range);
+      case 'RowNumber':
+        this.error(range, `a number cannot stand among the units`, "to repeat units, put them in a group with a count: '(AB CB)x3'");
+        return undefined;
+      case 'Colon':
+        this.error(range, "a row has one ':', after its number", "start a new row on its own line: 'row 4: ...'");
+        return undefined;
+      default:
+        this.error(range, `'${t.image}' repeats a group, but no group comes before it`, "put the units to repeat in '( )' right before the count: '(AB CB)x2'");
+        return undefined;
+    }
+  }
+
+  private unit(image: string, range: SourceRange): ItemNode | undefined {
+    const mark = image[0] === '*' || image[0] === '+' ? image[0] : '';
+    const written = image.slice(mark.length);
+    if (written === '') {
+      this.error(range, `'${mark}' needs its colour keys right after it`, `write the unit's keys with no space: '${mark}CCB'`);
+      return undefined;
+    }
+    const keys = written.toUpperCase();
+    if (keys !== written) {
+      this.diagnostics.push({
+        severity: 'error',
+        id: 'syntax',
+        message: `colour keys are capital letters: '${image}' should be '${mark}${keys}'`,
+        range,
+        fix: { title: `write '${mark}${keys}'`, range, replacement: mark + keys },
+      });
+    }
+    if (keys.length > 4) {
+      this.error(range, `'${image}' has ${keys.length} colour keys, but a unit takes 1 to 4 new beads`, 'leave a space between units');
+    }
+    return { type: 'unit', mark, keys, range };
+  }
+
+  group(ctx: Children): GroupNode | undefined {
+    const open = tokens(ctx, 'LParen')[0];
+    if (!real(open)) return undefined;
+    const items = nodes(ctx, 'body').flatMap((b) => this.visit(b) as ItemNode[]);
+    const close = tokens(ctx, 'RParen').find(real);
+    const times = tokens(ctx, 'Times').find(real);
+    const openRange = this.range(open);
+    let count = 1;
+    if (!close) this.error(openRange, "this group '(' is not closed", "close it with ')' and a repeat count, like '(AB CB)x2'");
+    else if (!times) this.error(this.range(close), "a group needs a repeat count after ')'", "write how many times it repeats, like ')x2'");
+    if (times) {
+      count = Number(/\d+/.exec(times.image)![0]);
+      if (count < 1) this.error(this.range(times), 'a repeat count is at least 1', "write 'x1' or more, or leave the group out");
+    }
+    if (items.length === 0) this.error(openRange, 'this group is empty', "put the units to repeat inside: '(AB CB)x2'");
+    const endTok = times ?? close;
+    const lastItem = items[items.length - 1];
+    const range = endTok ? span(openRange, this.range(endTok)) : lastItem ? span(openRange, lastItem.range) : openRange;
+    return { type: 'group', items, times: count, range };
+  }
+}
+
+/** Merge two lists of CST elements, each already in source order, by start offset. */
+function mergeByOffset<T extends IToken | CstNode>(a: T[], b: T[]): T[] {
+  const out: T[] = [];
+  let i = 0;
+  let j = 0;
+  while (i < a.length || j < b.length) {
+    if (j >= b.length || (i < a.length && startOf(a[i]!) <= startOf(b[j]!))) out.push(a[i++]!);
+    else out.push(b[j++]!);
+  }
+  return out;
+}
+
+function startOf(el: IToken | CstNode): number {
+  if ('image' in el) return el.startOffset;
+  let best = Infinity;
+  for (const list of Object.values(el.children)) {
+    const first = list[0];
+    if (first) best = Math.min(best, startOf(first));
+  }
+  return best;
+}
+
+/** Turn the CST into the AST, placing each line and attaching comments. */
+export function toAst(cst: CstNode, ix: LineIndex, commentTokens: IToken[]): Result<PatternAst> {
+  const builder = new AstBuilder(ix);
+  const lines = builder.visit(cst) as Line[];
+  const diagnostics = builder.diagnostics;
+  const comments: Comment[] = commentTokens.map((t) => ({ text: t.image.slice(1), range: ix.range(t.startOffset, endOf(t)) }));
+  const placed = placeLines(lines, comments, ix, diagnostics);
+  return { value: placed, diagnostics };
+}
+
+function placeLines(lines: Line[], comments: Comment[], ix: LineIndex, diagnostics: Diagnostic[]): PatternAst {
+  const entries: HeaderEntry[] = [];
+  const colors: ColorDef[] = [];
+  const notes: NoteNode[] = [];
+  const rows: RowNode[] = [];
+  let colorsComments: Comment[] | undefined;
+  let inColors = false;
+  let c = 0;
+  const headComments: Comment[] = [];
+  const takeBefore = (offset: number): Comment[] => {
+    const out: Comment[] = [];
+    while (c < comments.length && comments[c]!.range.offset < offset) out.push(comments[c++]!);
+    return out;
+  };
+  const err = (range: SourceRange, message: string, hint: string): void => {
+    diagnostics.push({ severity: 'error', id: 'syntax', message, range, hint });
+  };
+
+  lines.forEach((line, i) => {
+    const start = line.kind === 'row' ? line.row.range.offset : line.range.offset;
+    const leading = takeBefore(start);
+    if (i === 0) headComments.push(...leading.splice(0));
+    const seenRow = rows.length > 0;
+    if (line.kind === 'row') {
+      const inside = takeBefore(line.end);
+      const trailing = inside.pop();
+      line.row.leadingComments = [...leading, ...inside];
+      if (trailing) line.row.trailingComment = trailing;
+      rows.push(line.row);
+      inColors = false;
+      return;
+    }
+    if (line.kind === 'key') {
+      if (line.key === NOTE_KEY) {
+        const note: NoteNode = { text: line.value, range: line.range, leadingComments: leading };
+        (seenRow ? rows[rows.length - 1]!.notes : notes).push(note);
+        return;
+      }
+      if ((COLORS_KEYS as readonly string[]).includes(line.key)) {
+        if (seenRow) err(line.keyRange, "the 'colors:' block goes before the first row", 'move it up, under the header');
+        if (line.value !== '') err(line.valueRange, "nothing goes after 'colors:' on its line", "write each colour on its own line below: '  A  #2e6f8e  teal'");
+        colorsComments = [...(colorsComments ?? []), ...leading];
+        inColors = true;
+        return;
+      }
+      if ((ROW_WORDS as readonly string[]).includes(line.key)) {
+        err(line.keyRange, `'${line.key}:' needs its number`, `write it like '${line.key} 3: AB CB'`);
+        return;
+      }
+      if (seenRow) err(line.keyRange, `the header line '${line.key}:' comes after a row`, 'header lines go before the first row');
+      entries.push({ ...line, leadingComments: leading });
+      return;
+    }
+    const def = colorLine(line, inColors && !seenRow, ix, diagnostics);
+    if (def) colors.push({ ...def, leadingComments: leading });
+  });
+  const tailComments = takeBefore(Infinity);
+  const { header, diagnostics: headerDiagnostics } = readHeader(entries);
+  diagnostics.push(...headerDiagnostics);
+  const ast: PatternAst = { header, colors, notes, rows, comments, headComments, tailComments };
+  if (colorsComments) ast.colorsComments = colorsComments;
+  return ast;
+}
+
+/** A colour line, or a word line that is not one (a header key without its ':', a stray word). */
+function colorLine(line: ColorLine, inBlock: boolean, ix: LineIndex, diagnostics: Diagnostic[]): Omit<ColorDef, 'leadingComments'> | undefined {
+  const push = (range: SourceRange, message: string, hint: string, id = 'syntax'): void => {
+    diagnostics.push({ severity: 'error', id, message, range, hint });
+  };
+  const lower = line.word.toLowerCase();
+  const known = [...HEADER_KEYS, NOTE_KEY, ...COLORS_KEYS];
+  if (known.includes(lower as never)) {
+    push(line.wordRange, `expected ':' after '${line.word}'`, `write '${line.word}: ...'`);
+    return undefined;
+  }
+  if (line.word.length > 1) {
+    const message = inBlock
+      ? `'${line.word}' is not a colour key: a key is one capital letter A-Z`
+      : `'${line.word}' is not a header key, a colour or a row.${didYouMean(lower, [...known, ...ROW_WORDS])}`;
+    push(line.wordRange, message, inBlock ? "write the colour as 'A  #2e6f8e  teal'" : "header lines look like 'title: Kestrel Fan'");
+    return undefined;
+  }
+  if (!inBlock) push(line.wordRange, `the colour line '${line.word}' is outside the 'colors:' block`, "put colour lines under a 'colors:' line, before the first row");
+  const key = line.word.toUpperCase();
+  if (key !== line.word) {
+    diagnostics.push({
+      severity: 'error',
+      id: 'syntax',
+      message: `colour keys are capital letters: '${line.word}' should be '${key}'`,
+      range: line.wordRange,
+      fix: { title: `write '${key}'`, range: line.wordRange, replacement: key },
+    });
+  }
+  const text = line.text;
+  const m = /^(\s*)(\S*)(\s*)(.*?)\s*$/.exec(text)!;
+  const written = m[2]!;
+  const cStart = line.textOffset + m[1]!.length;
+  const colorRange = ix.range(cStart, cStart + written.length);
+  const hex = written === '' ? null : colorHex(written);
+  if (written === '') push(line.wordRange, `colour '${key}' has no colour`, "write a hex colour or a CSS colour name after the key: 'A  #2e6f8e  teal'", 'bad-color');
+  else if (hex === null) diagnostics.push(badColor(key, written, colorRange));
+  return { key, written, hex, name: m[4]!, range: line.range, keyRange: line.wordRange, colorRange };
+}

@@ -1,0 +1,89 @@
+/**
+ * Token types of the notation. The file is line-oriented, so the lexer runs in
+ * three modes: `line` at the start of each line, `row` inside a row line (and
+ * its continuation lines), `text` for the free text after a header key, a
+ * note or a colour key. Keeping the modes in the lexer keeps the grammar
+ * small: it only ever sees whole, already classified lines.
+ */
+import { createToken, Lexer, type TokenType } from 'chevrotain';
+
+const LINE = 'line';
+const ROW = 'row';
+const TEXT = 'text';
+export const modes = { LINE, ROW, TEXT } as const;
+
+/** Blank space and empty lines between lines: nothing in the grammar depends on them. */
+export const Gap = createToken({ name: 'Gap', pattern: /[ \t\r\n]+/, group: Lexer.SKIPPED, line_breaks: true });
+
+/** Spaces inside a row or before the end of a line. */
+export const Blank = createToken({ name: 'Blank', pattern: /[ \t\r]+/, group: Lexer.SKIPPED });
+
+/** `# ...` to the end of the line; collected apart from the token stream so `fmt` can keep them. */
+export const Comment = createToken({ name: 'Comment', pattern: /#[\u0000-\u0009\u000b\u000c\u000e-\uffff]*/, group: 'comments' });
+
+/** `title:`, `note:`, `colors:` and any other `word:` at the start of a line. */
+export const HeaderKey = createToken({ name: 'HeaderKey', pattern: /[A-Za-z][\w-]*[ \t]*:/, push_mode: TEXT });
+
+/**
+ * `row`, `rows`, `round`, `rounds`, or any other word of two or more letters
+ * followed by a number, so a typo like `rwo 3:` still reads as a row and can
+ * get a did-you-mean instead of a wall of errors.
+ */
+export const RowStart = createToken({
+  name: 'RowStart',
+  pattern: /(?:rows?|rounds?)(?![\w-])|[A-Za-z]{2,}(?=[ \t]*\d)/i,
+  push_mode: ROW,
+});
+
+/** Any other word at the start of a line: a colour line (`A  #F4F1EA  chalk`). */
+export const ColorKey = createToken({ name: 'ColorKey', pattern: /[A-Za-z][\w-]*/, push_mode: TEXT });
+
+/** The rest of a line after a header key or colour key. */
+export const Text = createToken({ name: 'Text', pattern: /[\u0000-\u0009\u000b\u000c\u000e-\uffff]+(?:\r(?!\n)[\u0000-\u0009\u000b\u000c\u000e-\uffff]*)*/ });
+// (A positive character range rather than [^\r\n], so Chevrotain can keep its first-character optimisation.)
+
+/** Ends a row or text line and returns to the `line` mode. */
+export const LineEnd = createToken({ name: 'LineEnd', pattern: /\r?\n/, line_breaks: true, pop_mode: true });
+
+/** A line break followed by an indented line that starts like units: the row goes on. */
+export const Continuation = createToken({
+  name: 'Continuation',
+  pattern: /\r?\n(?=[ \t]+[-*+(A-Z])/,
+  group: Lexer.SKIPPED,
+  line_breaks: true,
+});
+
+/** Tokens that may stand in a row's unit list, kept in one CST array so their order survives. */
+export const BodyToken = createToken({ name: 'BodyToken', pattern: Lexer.NA });
+
+/** A repeat count after a group: `x3`, `x 3`, `×3`, `X3`. Before `Unit` so `x3` is never read as keys. */
+export const Times = createToken({ name: 'Times', pattern: /[x×][ \t]*\d+|X\d+/, categories: BodyToken });
+
+/**
+ * One whole unit as a single token (`+CCB`, `AB`), not one token per key: a
+ * row of a thousand units is a thousand tokens. Lower-case keys are lexed too
+ * so the AST step can say "colour keys are capital letters".
+ */
+export const Unit = createToken({ name: 'Unit', pattern: /[*+][A-Za-z]*|[A-Za-z]+/, categories: BodyToken });
+
+/** A skip, or the dash of a row range `rows 2-5`. */
+export const Dash = createToken({ name: 'Dash', pattern: /-/, categories: BodyToken });
+
+export const RowNumber = createToken({ name: 'RowNumber', pattern: /\d+/, categories: BodyToken });
+export const Colon = createToken({ name: 'Colon', pattern: /:/, categories: BodyToken });
+export const LParen = createToken({ name: 'LParen', pattern: /\(/ });
+export const RParen = createToken({ name: 'RParen', pattern: /\)/ });
+
+export const lexerDefinition: { modes: Record<string, TokenType[]>; defaultMode: string } = {
+  modes: {
+    [LINE]: [Gap, Comment, HeaderKey, RowStart, ColorKey],
+    [ROW]: [Continuation, LineEnd, Blank, Comment, Times, Unit, Dash, RowNumber, Colon, LParen, RParen],
+    [TEXT]: [LineEnd, Text],
+  },
+  defaultMode: LINE,
+};
+
+export const allTokens: TokenType[] = [
+  Gap, Blank, Comment, HeaderKey, RowStart, ColorKey, Text, LineEnd, Continuation,
+  BodyToken, Times, Unit, Dash, RowNumber, Colon, LParen, RParen,
+];
