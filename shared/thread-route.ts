@@ -1,0 +1,65 @@
+/**
+ * Rule 4 of the thread: the shortest route through beads already in place,
+ * never straight back into the bead just left, ties broken bead by bead in
+ * favour of the bead added later. A breadth-first search over (bead left,
+ * junction) states; each layer is kept in the order of preference, so the
+ * first state to reach the target carries the preferred route.
+ */
+
+/** Beads by junction (compressed rows), each bead's two ends, and pick-up ranks (-1: not yet in place). */
+export interface Net {
+  start: Int32Array;
+  at: Int32Array;
+  ends: readonly number[];
+  rank: readonly number[];
+}
+
+/** True when route `a` is preferred to route `b`: shorter, or at the first differing bead the later-added one. */
+export function preferRoute(rank: readonly number[], a: readonly number[], b: readonly number[]): boolean {
+  if (a.length !== b.length) return a.length < b.length;
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return rank[a[i]!]! > rank[b[i]!]!;
+  return false;
+}
+
+/** The preferred route from junction `from` (having just left bead `last`, -1 for none) to `target`, or null past `limit` beads. */
+export function findRoute(net: Net, from: number, last: number, target: number, limit: number): number[] | null {
+  if (from === target) return [];
+  const stJ: number[] = [from];
+  const stBead: number[] = [last];
+  const stParent: number[] = [-1];
+  const seen = new Set<number>();
+  let layer = [0];
+  const options: number[] = [];
+  for (let depth = 1; depth <= limit && layer.length > 0; depth++) {
+    const next: number[] = [];
+    for (const s of layer) {
+      const j = stJ[s]!;
+      options.length = 0;
+      for (let i = net.start[j]!; i < net.start[j + 1]!; i++) {
+        const b = net.at[i]!;
+        if (b !== stBead[s] && net.rank[b]! >= 0) options.push(b);
+      }
+      options.sort((x, y) => net.rank[y]! - net.rank[x]!);
+      for (const b of options) {
+        const out = net.ends[2 * b] === j ? net.ends[2 * b + 1]! : net.ends[2 * b]!;
+        const key = 2 * b + (out === net.ends[2 * b] ? 0 : 1);
+        if (seen.has(key)) continue;
+        seen.add(key);
+        stJ.push(out);
+        stBead.push(b);
+        stParent.push(s);
+        const id = stJ.length - 1;
+        if (out === target) return unwind(id, stBead, stParent);
+        next.push(id);
+      }
+    }
+    layer = next;
+  }
+  return null;
+}
+
+function unwind(id: number, stBead: readonly number[], stParent: readonly number[]): number[] {
+  const route: number[] = [];
+  for (let s = id; stParent[s]! !== -1; s = stParent[s]!) route.push(stBead[s]!);
+  return route.reverse();
+}

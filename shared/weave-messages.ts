@@ -1,0 +1,56 @@
+/**
+ * The wording of the weave checks, kept apart from the net builder so the
+ * builder reads as rules and the messages read as sentences.
+ */
+import type { Diagnostic, Severity, SourceRange } from './diagnostic.js';
+import type { Layout, UnitNode } from '../parser/ast.js';
+
+const BASE_BIT = 1;
+const FAR_BIT = 2;
+const NEAR_BIT = 8;
+
+export function weaveDiagnostic(severity: Severity, id: string, message: string, range: SourceRange, hint?: string): Diagnostic {
+  return hint === undefined ? { severity, id, message, range } : { severity, id, message, range, hint };
+}
+
+function sharesPhrase(shared: number, mark: string, first: boolean, firstRow: boolean): string {
+  if (shared === 0) {
+    if (mark === '*') return 'a fresh ring shares no bead';
+    return firstRow && first ? 'the first unit of row 1 shares no bead' : 'this unit shares no bead';
+  }
+  const parts: string[] = [];
+  if (shared & NEAR_BIT) parts.push('its near bead');
+  if (shared & BASE_BIT) parts.push('a base bead');
+  if (shared & FAR_BIT) parts.push('its far bead (the row closes on its first unit)');
+  const list = parts.length === 1 ? parts[0]! : `${parts.slice(0, -1).join(', ')} and ${parts[parts.length - 1]!}`;
+  return `this unit shares ${list}`;
+}
+
+interface Where {
+  layout: Layout;
+  first: boolean;
+  firstRow: boolean;
+  last: boolean;
+}
+
+function suggestion(shared: number, expected: number, unit: UnitNode, where: Where): string {
+  const written = unit.keys.length;
+  if (unit.mark === '' && written === expected + 1 && shared & BASE_BIT && !where.first) {
+    if (where.layout === 'round' || (where.layout === 'flat' && where.last)) return "Mark an increase with '+' if that is meant.";
+  }
+  if (unit.mark === '' && written === 4 && where.first && !where.firstRow && where.layout === 'flat')
+    return "Mark a fresh ring with '*' if that is meant.";
+  if (unit.mark === '+' && written === expected - 1) return "Remove the '+' if no increase is meant.";
+  if (unit.mark === '*' && written === 3) return "Remove the '*' if the unit is meant to build on the row before.";
+  return `Write ${expected} key${expected === 1 ? '' : 's'}, one for each new bead.`;
+}
+
+/** `row 4, unit 3: this unit shares its near bead and a base bead, so it takes 2 new beads; 3 are written (C C B). ...` */
+export function beadCountMessage(row: number, index: number, shared: number, expected: number, unit: UnitNode, where: Where): { message: string } {
+  const written = unit.keys.length;
+  const spaced = [...unit.keys].join(' ');
+  const message =
+    `row ${row}, unit ${index}: ${sharesPhrase(shared, unit.mark, where.first, where.firstRow)}, so it takes ${expected} new bead${expected === 1 ? '' : 's'}; ` +
+    `${written} ${written === 1 ? 'is' : 'are'} written (${spaced}). ${suggestion(shared, expected, unit, where)}`;
+  return { message };
+}

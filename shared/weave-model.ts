@@ -1,0 +1,128 @@
+/**
+ * The `fourfold.model/1` value from the three engine stages: the net
+ * (weave.ts), the thread (thread.ts) and the geometry (layout.ts). Bead ids
+ * become pick-up ranks here, so a bead's id says when the thread added it.
+ */
+import { sortDiagnostics, type Diagnostic, type Result } from './diagnostic.js';
+import type { PatternAst } from '../parser/ast.js';
+import type { Bead, LayoutInfo, Model, RowInfo, ThreadPass, Unit, UnitStep } from './model.js';
+import { popcount, weave, type Weave } from './weave.js';
+import { PLACES, thread, type Thread } from './thread.js';
+import { layout, type Geometry } from './layout.js';
+
+const r4 = (n: number): number => Math.round(n * 1e4) / 1e4;
+
+function beadsOf(w: Weave, t: Thread, g: Geometry): Bead[] {
+  const beads = new Array<Bead>(w.beadOwner.length);
+  for (let old = 0; old < w.beadOwner.length; old++) {
+    const sharer = w.beadSharer[old]!;
+    const bead: Bead = {
+      id: t.rank[old]!,
+      color: t.color[old]!,
+      units: sharer === -1 ? [w.beadOwner[old]!] : [w.beadOwner[old]!, sharer],
+      places: sharer === -1 ? [PLACES[w.beadOwnerPlace[old]!]!] : [PLACES[w.beadOwnerPlace[old]!]!, PLACES[w.beadSharerPlace[old]!]!],
+      junctions: [w.beadEnds[2 * old]!, w.beadEnds[2 * old + 1]!],
+      x: r4(g.bx[old]!),
+      y: r4(g.by[old]!),
+      angle: r4(g.bAngle[old]!),
+      length: r4(g.bLength[old]!),
+    };
+    if (g.bGap[old]) bead.gap = true;
+    beads[bead.id] = bead;
+  }
+  return beads;
+}
+
+function unitsOf(w: Weave, t: Thread, g: Geometry, id: (old: number) => number | null): Unit[] {
+  return w.units.map((u, i) => {
+    const step = t.steps[i]!;
+    const unit: Unit = {
+      id: i,
+      row: u.row,
+      index: u.index,
+      mark: u.mark,
+      places: { base: id(u.beads[0]!), far: id(u.beads[1]!), top: id(u.beads[2]!), near: id(u.beads[3]!) },
+      x: r4(g.ux[i]!),
+      y: r4(g.uy[i]!),
+      angle: r4(g.uAngle[i]!),
+      direction: step.direction,
+      startCorner: step.startCorner,
+      source: { line: u.range.line, column: u.range.column, endLine: u.range.endLine, endColumn: u.range.endColumn },
+    };
+    // A failed unit shows only the beads it would have shared; its own places stay empty.
+    if (u.failed) unit.failed = true;
+    return unit;
+  });
+}
+
+function assembleModel(ast: PatternAst, w: Weave, t: Thread, g: Geometry, layout: LayoutInfo, diagnostics: Diagnostic[]): Model {
+  const id = (old: number): number | null => (old < 0 ? null : t.rank[old]!);
+  const ranked = (b: number): number => t.rank[b]!;
+  const passes: ThreadPass[] = t.passes.map((p) => ({ ...p, bead: ranked(p.bead) }));
+  const steps: UnitStep[] = t.steps.map((s) => ({
+    ...s,
+    actions: s.actions.map((a) => ({ ...a, bead: ranked(a.bead) })),
+    moveOn: s.moveOn.map(ranked),
+  }));
+  const rows: RowInfo[] = w.rows.map((r) => ({
+    row: r.row,
+    word: r.word,
+    units: r.units,
+    beads: r.units.reduce((n, u) => n + (w.units[u]!.failed ? 0 : 4 - popcount(w.units[u]!.shared)), 0),
+    heading: r.heading,
+    notes: r.notes,
+    line: r.line,
+  }));
+  const h = ast.header;
+  return {
+    schema: 'fourfold.model/1',
+    header: {
+      title: h.title,
+      ...(h.designer !== undefined && { designer: h.designer }),
+      beads: h.beads,
+      layout: h.layout,
+      order: h.order,
+      ...(h.thread !== undefined && { thread: h.thread }),
+      ...(h.description !== undefined && { description: h.description }),
+      ...(h.license !== undefined && { license: h.license }),
+      notes: ast.notes.map((n) => n.text),
+    },
+    palette: ast.colors.filter((c) => c.hex !== null).map((c) => ({ key: c.key, hex: c.hex!, name: c.name })),
+    layout,
+    rows,
+    units: unitsOf(w, t, g, id),
+    beads: beadsOf(w, t, g),
+    junctions: g.jx.map((x, j) => ({ id: j, x: r4(x), y: r4(g.jy[j]!) })),
+    thread: passes,
+    steps,
+    diagnostics,
+  };
+}
+
+export interface Compiled {
+  ast: PatternAst;
+  model: Model;
+}
+
+/** Same diagnostic twice (a limit both the parser and the engine meet) is shown once. */
+function merge(...lists: Diagnostic[][]): Diagnostic[] {
+  const seen = new Set<string>();
+  const out: Diagnostic[] = [];
+  for (const d of lists.flat()) {
+    const key = `${d.id}@${d.range.offset}:${d.range.endOffset}:${d.message}`;
+    if (seen.has(key)) continue;
+    seen.add(key);
+    out.push(d);
+  }
+  return sortDiagnostics(out);
+}
+
+/** From an AST (parsed, or built by a tool) to the model: weave, thread, layout. `earlier` are the parser's diagnostics. */
+export function compileAst(ast: PatternAst, earlier: Diagnostic[] = []): Result<Compiled> {
+  const net = weave(ast);
+  const path = thread(net.value);
+  const geo = layout(net.value, ast.header.beads);
+  const diagnostics = merge(earlier, net.diagnostics, path.diagnostics, geo.diagnostics);
+  const model = assembleModel(ast, net.value, path.value, geo.value, geo.value.size, diagnostics);
+  return { value: { ast, model }, diagnostics };
+}

@@ -1,0 +1,347 @@
+/**
+ * The bead net: from a `PatternAst` to units, beads and junctions, by the
+ * sharing rules of NOTATION.md section 3. Where beads land inside a unit is the
+ * thread's business (thread.ts); this stage only decides which places a unit
+ * shares, which corners it shares, and checks the bead count.
+ *
+ * Places and corners are small integers so the whole net is numbers in arrays:
+ * place 0 base, 1 far, 2 top, 3 near; corner k sits between place k and place
+ * k+1 (0 base|far, 1 far|top, 2 top|near, 3 near|base). The bead at place p
+ * runs from corner p-1 to corner p.
+ */
+import type { Diagnostic, Result, SourceRange } from './diagnostic.js';
+import type { ItemNode, Layout, KeyOrder, Mark, PatternAst, RowNode, UnitNode } from '../parser/ast.js';
+import { weaveDiagnostic, beadCountMessage } from './weave-messages.js';
+
+export const BASE = 0;
+export const FAR = 1;
+export const TOP = 2;
+export const NEAR = 3;
+export const UNIT_LIMIT = 200_000;
+
+export interface WeaveUnit {
+  row: number;
+  /** 1-based position among the units of its row, in the order of work. */
+  index: number;
+  mark: Mark;
+  keys: string;
+  range: SourceRange;
+  /** Bead at each place (base, far, top, near); -1 where there is none. */
+  beads: number[];
+  /** Junction at each corner (base|far, far|top, top|near, near|base); -1 where none. */
+  corners: number[];
+  /** Bit p is set when place p holds a bead placed by an earlier unit. */
+  shared: number;
+  failed: boolean;
+  /** Grid column (flat and tube) and the row's heading on the grid (+1 right, -1 left). */
+  col: number;
+  heading: 1 | -1;
+  /** 0-based position of the unit's row among the built rows. */
+  rowIndex: number;
+}
+
+export interface WeaveRow {
+  row: number;
+  word: 'row' | 'round';
+  units: number[];
+  heading: 'right' | 'left' | 'around';
+  notes: string[];
+  line: number;
+}
+
+export interface Weave {
+  layout: Layout;
+  order: KeyOrder;
+  units: WeaveUnit[];
+  rows: WeaveRow[];
+  /** Per bead: its two ends, the unit that picks it up and its place there, the unit that shares it (-1) and its place. */
+  beadEnds: number[];
+  beadOwner: number[];
+  beadOwnerPlace: number[];
+  beadSharer: number[];
+  beadSharerPlace: number[];
+  junctionCount: number;
+}
+
+/** One top bead of a row, as the next row meets it: its ends on the near and far side of the new row's direction. */
+interface BaseSlot {
+  bead: number;
+  nearJ: number;
+  farJ: number;
+  col: number;
+}
+
+type FlatItem = UnitNode | { type: 'skip'; range: SourceRange };
+
+export const popcount = (mask: number): number => (mask & 1) + ((mask >> 1) & 1) + ((mask >> 2) & 1) + ((mask >> 3) & 1);
+
+/** Groups written out, stopping at `budget` units; returns false when the budget ran out. */
+function expand(items: readonly ItemNode[], out: FlatItem[], budget: { left: number }): boolean {
+  for (const item of items) {
+    if (item.type === 'group') {
+      for (let t = 0; t < item.times; t++) if (!expand(item.items, out, budget)) return false;
+    } else {
+      if (item.type === 'unit' && --budget.left < 0) return false;
+      out.push(item);
+    }
+  }
+  return true;
+}
+
+class Builder {
+  readonly w: Weave;
+  readonly diagnostics: Diagnostic[] = [];
+  private readonly closed: boolean;
+
+  constructor(ast: PatternAst) {
+    const layout = ast.header.layout;
+    this.closed = layout !== 'flat';
+    this.w = {
+      layout,
+      order: ast.header.order,
+      units: [],
+      rows: [],
+      beadEnds: [],
+      beadOwner: [],
+      beadOwnerPlace: [],
+      beadSharer: [],
+      beadSharerPlace: [],
+      junctionCount: 0,
+    };
+  }
+
+  private junction(): number {
+    return this.w.junctionCount++;
+  }
+
+  private bead(owner: number, place: number, j0: number, j1: number): number {
+    const w = this.w;
+    const id = w.beadOwner.length;
+    w.beadEnds.push(j0, j1);
+    w.beadOwner.push(owner);
+    w.beadOwnerPlace.push(place);
+    w.beadSharer.push(-1);
+    w.beadSharerPlace.push(-1);
+    return id;
+  }
+
+  private share(bead: number, unit: number, place: number): void {
+    this.w.beadSharer[bead] = unit;
+    this.w.beadSharerPlace[bead] = place;
+  }
+
+  private error(id: string, message: string, range: SourceRange, hint?: string): void {
+    this.diagnostics.push(weaveDiagnostic('error', id, message, range, hint));
+  }
+
+  /** The top beads of a row as the next row meets them: flat rows turn back, closed rows go on round. */
+  private slotsOf(row: WeaveRow): BaseSlot[] {
+    const slots: BaseSlot[] = [];
+    for (const id of row.units) {
+      const u = this.w.units[id]!;
+      if (u.failed) continue;
+      const turn = !this.closed;
+      slots.push({ bead: u.beads[TOP]!, nearJ: u.corners[turn ? 1 : 2]!, farJ: u.corners[turn ? 2 : 1]!, col: u.col });
+    }
+    if (!this.closed) slots.reverse();
+    return slots;
+  }
+
+  build(rows: readonly RowNode[]): void {
+    let used = 0;
+    let prev: { row: WeaveRow; complete: boolean } | null = null;
+    for (const node of rows) {
+      const items: FlatItem[] = [];
+      const fits = expand(node.items, items, { left: UNIT_LIMIT - used });
+      const count = countUnits(items);
+      for (let n = node.from; n <= node.to; n++) {
+        if (!fits || used + count > UNIT_LIMIT) {
+          this.error('too-large', `the pattern expands past ${UNIT_LIMIT.toLocaleString('en')} units; it is built up to row ${n - 1}`, node.range);
+          return;
+        }
+        used += count;
+        prev = this.buildRow(node, n, items, prev);
+      }
+    }
+  }
+
+  private buildRow(
+    node: RowNode,
+    n: number,
+    items: readonly FlatItem[],
+    prev: { row: WeaveRow; complete: boolean } | null,
+  ): { row: WeaveRow; complete: boolean } {
+    const w = this.w;
+    const rowIndex = w.rows.length;
+    const h: 1 | -1 = this.closed || rowIndex % 2 === 0 ? 1 : -1;
+    const row: WeaveRow = {
+      row: n,
+      word: node.word,
+      units: [],
+      heading: this.closed ? 'around' : h === 1 ? 'right' : 'left',
+      notes: node.notes.map((note) => note.text),
+      line: node.range.line,
+    };
+    w.rows.push(row);
+    const slots = prev ? this.slotsOf(prev.row) : [];
+    const firstRow = prev === null;
+    let ptr = 0;
+    let index = 0;
+    const lastUnitAt = lastIndexOf(items, (it) => it.type === 'unit');
+    const firstUnitAt = items.findIndex((it) => it.type === 'unit');
+
+    for (let i = 0; i < items.length; i++) {
+      const item = items[i]!;
+      if (item.type === 'skip') {
+        const inside = firstUnitAt !== -1 && i > firstUnitAt && i < lastUnitAt;
+        if (firstRow || (!this.closed && inside)) {
+          this.error('misplaced-mark', misplacedSkip(firstRow), item.range);
+          return { row, complete: false };
+        }
+        if (ptr >= slots.length) {
+          if (prev?.complete !== false) this.error('no-base-left', `row ${n}: this skip has no bead of row ${n - 1} left to pass over`, item.range);
+          return { row, complete: false };
+        }
+        ptr++;
+        continue;
+      }
+      index++;
+      const first = index === 1;
+      const closing = this.closed && i === lastUnitAt && !first;
+      const misplaced = this.checkMark(item, first, firstRow, i, items);
+      const id = w.units.length;
+      const unit: WeaveUnit = {
+        row: n,
+        index,
+        mark: item.mark,
+        keys: item.keys,
+        range: item.range,
+        beads: [-1, -1, -1, -1],
+        corners: [-1, -1, -1, -1],
+        shared: 0,
+        failed: true,
+        col: 0,
+        heading: h,
+        rowIndex,
+      };
+      w.units.push(unit);
+      row.units.push(id);
+      const before = first ? null : w.units[row.units[row.units.length - 2]!]!;
+      const wantsBase = !firstRow && item.mark === '';
+      const slot = slots[ptr];
+      if (before) unit.beads[NEAR] = before.beads[FAR]!;
+      if (wantsBase && slot) unit.beads[BASE] = slot.bead;
+      unit.col = wantsBase && slot ? slot.col : before ? before.col + h : item.mark === '*' ? (slot?.col ?? 0) - h : index - 1;
+      if (misplaced) {
+        this.error('misplaced-mark', misplaced, item.range);
+        return { row, complete: false };
+      }
+      if (wantsBase && ptr >= slots.length) {
+        if (prev?.complete !== false)
+          this.error('no-base-left', `row ${n}, unit ${index}: this unit needs a base bead, but row ${n - 1} has none left to build on`, item.range, first ? undefined : "Mark an increase with '+' if a new unit beyond the row's end is meant.");
+        return { row, complete: false };
+      }
+      let shared = (before ? 1 << NEAR : 0) | (wantsBase ? 1 << BASE : 0);
+      if (closing) shared |= 1 << FAR;
+      const expected = 4 - popcount(shared);
+      if (item.keys.length !== expected) {
+        const { message } = beadCountMessage(n, index, shared, expected, item, { layout: w.layout, first, firstRow, last: i === lastUnitAt });
+        this.error('bead-count', message, item.range);
+        return { row, complete: false };
+      }
+      this.place(id, unit, before, shared, wantsBase ? slot! : null, slot ?? null, closing ? w.units[row.units[0]!]! : null);
+      if (wantsBase) ptr++;
+    }
+    if (ptr < slots.length && !firstRow) {
+      const left = slots.length - ptr;
+      this.diagnostics.push(
+        weaveDiagnostic(
+          'warning',
+          'uncovered-base',
+          `row ${n} leaves ${left} bead${left === 1 ? '' : 's'} of row ${n - 1} uncovered`,
+          node.range,
+          "Build on them, or write '-' for each bead the row passes over.",
+        ),
+      );
+    }
+    return { row, complete: true };
+  }
+
+  /** The reason a mark (or its absence) is not allowed here, or null. */
+  private checkMark(item: UnitNode, first: boolean, firstRow: boolean, i: number, items: readonly FlatItem[]): string | null {
+    const layout = this.w.layout;
+    if (item.mark === '*') {
+      if (layout !== 'flat') return `a fresh ring '*' is only used in flat pieces; this is a ${layout}`;
+      if (firstRow) return "row 1 starts with an unmarked unit; '*' starts a later row one place beyond the end of the row before";
+      if (!first || i > 0) return "a fresh ring '*' can only be the first unit of a row";
+    }
+    if (item.mark === '+') {
+      if (first) return "an increase '+' shares the bead of the unit before it, so it cannot be a row's first unit";
+      if (firstRow) return "row 1 has no row below it, so an increase '+' means nothing there; write the unit unmarked";
+      if (layout === 'tube') return "a tube keeps the same number of units in every row, so it has no increases '+'";
+      if (layout === 'flat' && items.slice(i + 1).some((it) => it.type === 'unit' && it.mark !== '+'))
+        return "in a flat piece an increase '+' can only stand at the end of a row, after the units built on the row before";
+    }
+    return null;
+  }
+
+  /** Shares, allocates and records the junctions and beads of a unit that passed its checks. */
+  private place(
+    id: number,
+    u: WeaveUnit,
+    before: WeaveUnit | null,
+    shared: number,
+    base: BaseSlot | null,
+    nextSlot: BaseSlot | null,
+    firstOfRow: WeaveUnit | null,
+  ): void {
+    const c = u.corners;
+    if (before) {
+      c[3] = before.corners[0]!;
+      c[2] = before.corners[1]!;
+      this.share(before.beads[FAR]!, id, NEAR);
+    }
+    if (base) {
+      if (c[3] === -1) c[3] = base.nearJ;
+      c[0] = base.farJ;
+      this.share(base.bead, id, BASE);
+    }
+    if (firstOfRow) {
+      c[0] = firstOfRow.corners[3]!;
+      c[1] = firstOfRow.corners[2]!;
+      u.beads[FAR] = firstOfRow.beads[NEAR]!;
+      this.share(u.beads[FAR], id, FAR);
+    }
+    if (u.mark === '*' && nextSlot) c[0] = nextSlot.nearJ;
+    // A round increase builds on nothing: its base bead is a loop at the corner its neighbours' lower corners meet.
+    if (u.mark === '+' && this.w.layout === 'round' && c[0] === -1) c[0] = c[3]!;
+    for (let k = 0; k < 4; k++) if (c[k] === -1) c[k] = this.junction();
+    for (let p = 0; p < 4; p++) if ((shared & (1 << p)) === 0) u.beads[p] = this.bead(id, p, c[(p + 3) % 4]!, c[p]!);
+    u.shared = shared;
+    u.failed = false;
+  }
+}
+
+function countUnits(items: readonly FlatItem[]): number {
+  let n = 0;
+  for (const it of items) if (it.type === 'unit') n++;
+  return n;
+}
+
+function lastIndexOf<T>(xs: readonly T[], pred: (x: T) => boolean): number {
+  for (let i = xs.length - 1; i >= 0; i--) if (pred(xs[i]!)) return i;
+  return -1;
+}
+
+function misplacedSkip(firstRow: boolean): string {
+  return firstRow
+    ? "row 1 has no row below it to pass over, so it cannot skip '-'"
+    : "in a flat piece a skip '-' can only stand at the start or the end of a row";
+}
+
+/** Builds the bead net. Never throws on user input: a unit that fails is reported and its row stops there. */
+export function weave(ast: PatternAst): Result<Weave> {
+  const b = new Builder(ast);
+  b.build(ast.rows);
+  return { value: b.w, diagnostics: b.diagnostics };
+}
