@@ -122,7 +122,9 @@ export function compileAst(ast: PatternAst, earlier: Diagnostic[] = []): Result<
   const net = weave(ast);
   const path = thread(net.value);
   const geo = layout(net.value, ast.header.beads);
-  const diagnostics = merge(earlier, net.diagnostics, path.diagnostics, geo.diagnostics);
+  // The parser words the size limit for the whole file; the engine's own stop at the limit need not say it again.
+  const own = earlier.some((d) => d.id === 'too-large') ? net.diagnostics.filter((d) => d.id !== 'too-large') : net.diagnostics;
+  const diagnostics = merge(earlier, own, path.diagnostics, geo.diagnostics);
   const model = assembleModel(ast, net.value, path.value, geo.value, geo.value.size, diagnostics);
   return { value: { ast, model }, diagnostics };
 }

@@ -10,14 +10,15 @@
  * runs from corner p-1 to corner p.
  */
 import type { Diagnostic, Result, SourceRange } from './diagnostic.js';
-import type { ItemNode, Layout, KeyOrder, Mark, PatternAst, RowNode, UnitNode } from '../parser/ast.js';
+import type { Layout, KeyOrder, Mark, PatternAst, RowNode, UnitNode } from '../parser/ast.js';
+import { expandRow, type FlatItem } from '../parser/expand.js';
+import { UNIT_LIMIT } from '../parser/limits.js';
 import { weaveDiagnostic, beadCountMessage } from './weave-messages.js';
 
 export const BASE = 0;
 export const FAR = 1;
 export const TOP = 2;
 export const NEAR = 3;
-export const UNIT_LIMIT = 200_000;
 
 export interface WeaveUnit {
   row: number;
@@ -71,22 +72,7 @@ interface BaseSlot {
   col: number;
 }
 
-type FlatItem = UnitNode | { type: 'skip'; range: SourceRange };
-
 export const popcount = (mask: number): number => (mask & 1) + ((mask >> 1) & 1) + ((mask >> 2) & 1) + ((mask >> 3) & 1);
-
-/** Groups written out, stopping at `budget` units; returns false when the budget ran out. */
-function expand(items: readonly ItemNode[], out: FlatItem[], budget: { left: number }): boolean {
-  for (const item of items) {
-    if (item.type === 'group') {
-      for (let t = 0; t < item.times; t++) if (!expand(item.items, out, budget)) return false;
-    } else {
-      if (item.type === 'unit' && --budget.left < 0) return false;
-      out.push(item);
-    }
-  }
-  return true;
-}
 
 class Builder {
   readonly w: Weave;
@@ -151,16 +137,15 @@ class Builder {
     let used = 0;
     let prev: { row: WeaveRow; complete: boolean } | null = null;
     for (const node of rows) {
-      const items: FlatItem[] = [];
-      const fits = expand(node.items, items, { left: UNIT_LIMIT - used });
-      const count = countUnits(items);
+      const expanded = expandRow(node, UNIT_LIMIT - used);
+      const count = countUnits(expanded.value);
       for (let n = node.from; n <= node.to; n++) {
-        if (!fits || used + count > UNIT_LIMIT) {
+        if (expanded.diagnostics.length > 0 || used + count > UNIT_LIMIT) {
           this.error('too-large', `the pattern expands past ${UNIT_LIMIT.toLocaleString('en')} units; it is built up to row ${n - 1}`, node.range);
           return;
         }
         used += count;
-        prev = this.buildRow(node, n, items, prev);
+        prev = this.buildRow(node, n, expanded.value, prev);
       }
     }
   }
@@ -185,6 +170,7 @@ class Builder {
     w.rows.push(row);
     const slots = prev ? this.slotsOf(prev.row) : [];
     const firstRow = prev === null;
+    const below = prev ? prev.row.row : n - 1;
     let ptr = 0;
     let index = 0;
     const lastUnitAt = lastIndexOf(items, (it) => it.type === 'unit');
@@ -199,7 +185,7 @@ class Builder {
           return { row, complete: false };
         }
         if (ptr >= slots.length) {
-          if (prev?.complete !== false) this.error('no-base-left', `row ${n}: this skip has no bead of row ${n - 1} left to pass over`, item.range);
+          if (prev?.complete !== false) this.error('no-base-left', `row ${n}: this skip has no bead of row ${below} left to pass over`, item.range);
           return { row, complete: false };
         }
         ptr++;
@@ -237,8 +223,13 @@ class Builder {
         return { row, complete: false };
       }
       if (wantsBase && ptr >= slots.length) {
-        if (prev?.complete !== false)
-          this.error('no-base-left', `row ${n}, unit ${index}: this unit needs a base bead, but row ${n - 1} has none left to build on`, item.range, first ? undefined : "Mark an increase with '+' if a new unit beyond the row's end is meant.");
+        // After a row that stopped early, running out of base beads is that row's error, already reported.
+        if (prev?.complete === false) {
+          w.units.pop();
+          row.units.pop();
+          return { row, complete: false };
+        }
+        this.error('no-base-left', `row ${n}, unit ${index}: this unit needs a base bead, but row ${below} has none left to build on`, item.range, first ? undefined : "Mark an increase with '+' if a new unit beyond the row's end is meant.");
         return { row, complete: false };
       }
       let shared = (before ? 1 << NEAR : 0) | (wantsBase ? 1 << BASE : 0);
@@ -258,7 +249,7 @@ class Builder {
         weaveDiagnostic(
           'warning',
           'uncovered-base',
-          `row ${n} leaves ${left} bead${left === 1 ? '' : 's'} of row ${n - 1} uncovered`,
+          `row ${n} leaves ${left} bead${left === 1 ? '' : 's'} of row ${below} uncovered`,
           node.range,
           "Build on them, or write '-' for each bead the row passes over.",
         ),
