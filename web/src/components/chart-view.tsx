@@ -1,0 +1,152 @@
+/**
+ * The interactive chart: the shared scene drawn with svg.js (shared/chart/
+ * svg-dom.ts), zoom and pan on the viewBox, a hover card for any bead, the
+ * current unit's new beads outlined and its thread path drawn over it, and
+ * units with open notes marked. The box keeps the chart's aspect ratio before
+ * anything is drawn, so nothing below it moves when it appears.
+ */
+import { useEffect, useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent } from 'react';
+import type { Model } from '../../../shared/model.js';
+import { buildScene } from '../../../shared/chart/scene.js';
+import type { ChartHandle } from '../../../shared/chart/svg-dom.js';
+import { drawChart, drawThread } from '../lib/draw-chart.js';
+import { boxText, pan, zoomAt, type Box } from '../lib/zoom.js';
+import { beadInfo, type BeadInfo } from '../lib/bead-info.js';
+
+export interface ChartViewProps {
+  model: Model;
+  dark: boolean;
+  /** The unit whose new beads are outlined and whose thread path is drawn. */
+  current?: number;
+  /** Units with open notes. */
+  noted?: readonly number[];
+  onPick?(unitId: number): void;
+}
+
+export function ChartView({ model, dark, current, noted = [], onPick }: ChartViewProps) {
+  const host = useRef<HTMLDivElement>(null);
+  const chart = useRef<ChartHandle | null>(null);
+  const drag = useRef<{ x: number; y: number; box: Box; moved: boolean } | null>(null);
+  const scene = useMemo(() => buildScene(model, { theme: dark ? 'dark' : 'light' }).value, [model, dark]);
+  const full: Box = useMemo(() => ({ x: 0, y: 0, w: scene.width, h: scene.height }), [scene]);
+  const [box, setBox] = useState<Box>(full);
+  const [hover, setHover] = useState<{ info: BeadInfo; left: number; top: number } | null>(null);
+  const currentRow = current === undefined ? undefined : model.units[current]?.row;
+  const threadScene = useMemo(
+    () => (currentRow === undefined ? null : buildScene(model, { theme: dark ? 'dark' : 'light', thread: currentRow }).value),
+    [model, dark, currentRow],
+  );
+
+  useLayoutEffect(() => {
+    if (!host.current) return;
+    chart.current = drawChart(host.current, scene);
+    setBox(full);
+    return () => chart.current?.remove();
+  }, [scene, full]);
+
+  useEffect(() => {
+    chart.current?.svg.attr('viewBox', boxText(box));
+  }, [box, scene]);
+
+  useEffect(() => {
+    const c = chart.current;
+    if (!c) return;
+    c.highlightUnit(current ?? null);
+    const notedSet = new Set(noted);
+    for (const el of c.svg.node.querySelectorAll<SVGElement>('[data-bead]')) {
+      const bead = model.beads[Number(el.dataset.bead)];
+      el.classList.toggle('ff-noted', bead !== undefined && bead.units.some((u) => notedSet.has(u)));
+    }
+    return threadScene && current !== undefined ? drawThread(c, threadScene, current) : undefined;
+  }, [scene, model, current, noted, threadScene]);
+
+  const toChart = (clientX: number, clientY: number) => {
+    const rect = chart.current!.svg.node.getBoundingClientRect();
+    return { x: box.x + ((clientX - rect.left) / rect.width) * box.w, y: box.y + ((clientY - rect.top) / rect.height) * box.h };
+  };
+  const zoom = (factor: number, at?: { x: number; y: number }) =>
+    setBox((b) => zoomAt(b, full, factor, at?.x ?? b.x + b.w / 2, at?.y ?? b.y + b.h / 2));
+
+  const onPointerMove = (e: PointerEvent) => {
+    if (drag.current && chart.current) {
+      const rect = chart.current.svg.node.getBoundingClientRect();
+      const dx = ((drag.current.x - e.clientX) / rect.width) * drag.current.box.w;
+      const dy = ((drag.current.y - e.clientY) / rect.height) * drag.current.box.h;
+      if (Math.abs(e.clientX - drag.current.x) + Math.abs(e.clientY - drag.current.y) > 3) drag.current.moved = true;
+      setBox(pan(drag.current.box, full, dx, dy));
+      return;
+    }
+    const el = (e.target as Element).closest?.('[data-bead]');
+    const info = el ? beadInfo(model, Number(el.getAttribute('data-bead'))) : null;
+    const hostRect = host.current!.getBoundingClientRect();
+    setHover(info ? { info, left: e.clientX - hostRect.left + 12, top: e.clientY - hostRect.top + 12 } : null);
+  };
+  const onPointerUp = (e: PointerEvent) => {
+    const wasDrag = drag.current?.moved;
+    drag.current = null;
+    if (wasDrag || !onPick) return;
+    const el = (e.target as Element).closest?.('[data-bead]');
+    const unit = el ? model.beads[Number(el.getAttribute('data-bead'))]?.units[0] : undefined;
+    if (unit !== undefined) onPick(unit);
+  };
+  const onKeyDown = (e: KeyboardEvent) => {
+    const stepX = box.w / 10;
+    const stepY = box.h / 10;
+    const moves: Record<string, [number, number]> = { ArrowLeft: [-stepX, 0], ArrowRight: [stepX, 0], ArrowUp: [0, -stepY], ArrowDown: [0, stepY] };
+    if (e.key === '+' || e.key === '=') zoom(1.25);
+    else if (e.key === '-') zoom(0.8);
+    else if (e.key === '0') setBox(full);
+    else if (e.shiftKey && moves[e.key]) setBox((b) => pan(b, full, ...moves[e.key]!));
+    else return;
+    e.preventDefault();
+  };
+
+  return (
+    <figure className="relative">
+      <div className="no-print mb-2 flex flex-wrap gap-2" role="toolbar" aria-label="Chart zoom">
+        <button type="button" className="btn" onClick={() => zoom(1.25)} aria-label="Zoom in">
+          +
+        </button>
+        <button type="button" className="btn" onClick={() => zoom(0.8)} aria-label="Zoom out">
+          −
+        </button>
+        <button type="button" className="btn" onClick={() => setBox(full)}>
+          Fit
+        </button>
+        <span className="muted self-center text-xs">Drag to pan; wheel, + and − to zoom; Shift+arrows pan when the chart has focus.</span>
+      </div>
+      <div
+        ref={host}
+        tabIndex={0}
+        role="img"
+        aria-label={`Chart of ${scene.title}: ${scene.desc}`}
+        data-testid="chart"
+        className="chart-host relative w-full touch-none overflow-hidden rounded border border-slate-300 dark:border-slate-600"
+        style={{ aspectRatio: `${scene.width} / ${scene.height}`, maxHeight: '75vh' }}
+        onWheel={(e) => zoom(e.deltaY < 0 ? 1.15 : 1 / 1.15, toChart(e.clientX, e.clientY))}
+        onPointerDown={(e) => {
+          drag.current = { x: e.clientX, y: e.clientY, box, moved: false };
+        }}
+        onPointerMove={onPointerMove}
+        onPointerUp={onPointerUp}
+        onPointerLeave={() => {
+          drag.current = null;
+          setHover(null);
+        }}
+        onKeyDown={onKeyDown}
+      />
+      {hover && (
+        <div
+          role="tooltip"
+          data-testid="bead-tooltip"
+          className="pointer-events-none absolute z-10 rounded border border-slate-400 bg-white p-2 text-xs shadow dark:bg-slate-800"
+          style={{ left: hover.left, top: hover.top + 40 }}
+        >
+          {hover.info.lines.map((l) => (
+            <p key={l}>{l}</p>
+          ))}
+        </div>
+      )}
+    </figure>
+  );
+}

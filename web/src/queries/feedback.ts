@@ -1,0 +1,31 @@
+/** Tester notes on a row or unit of a pattern. */
+import { queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '../api/client.js';
+import type { FeedbackNote } from '../api/types.js';
+import { patternKeys } from './patterns.js';
+
+export const feedbackKeys = { list: (id: number) => [...patternKeys.detail(id), 'feedback'] as const };
+
+export const feedbackQuery = (id: number) =>
+  queryOptions({
+    queryKey: feedbackKeys.list(id),
+    queryFn: ({ signal }) => api<{ items: FeedbackNote[] }>(`/api/patterns/${id}/feedback`, { signal }),
+  });
+
+export function useAddNote(id: number) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (note: { row: number; unit?: number; text: string; version?: number }) =>
+      api<FeedbackNote>(`/api/patterns/${id}/feedback`, { method: 'POST', json: note }),
+    onSuccess: () => client.invalidateQueries({ queryKey: feedbackKeys.list(id) }),
+  });
+}
+
+export function useResolveNote(id: number) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: (noteId: number) =>
+      api<FeedbackNote>(`/api/patterns/${id}/feedback/${noteId}`, { method: 'PATCH', json: { status: 'resolved' } }),
+    onSuccess: () => client.invalidateQueries({ queryKey: feedbackKeys.list(id) }),
+  });
+}
