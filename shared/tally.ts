@@ -5,6 +5,7 @@
  * tally agrees with the chart by construction.
  */
 import { fileStart, type Diagnostic, type Result } from './diagnostic.js';
+import { beadSize } from './bead-sizes.js';
 import type { Bead, Model, ThreadPass } from './model.js';
 
 export interface GramRange {
@@ -13,8 +14,8 @@ export interface GramRange {
 }
 
 export interface TallyOptions {
-  /** Beads per gram for the pattern's bead size, as a low-high range. */
-  beadsPerGram: GramRange;
+  /** Beads per gram as a low-high range; by default the bead-size table's for the pattern's beads. */
+  beadsPerGram?: GramRange;
   /** Spare margin for misshapen beads, as a fraction (0.1 = 10%). */
   spare?: number;
   /** Round each buy amount up to whole packs of this many grams. */
@@ -56,7 +57,7 @@ function optionProblem(message: string): Diagnostic {
   return { severity: 'error', id: 'tally-option', message, range: fileStart };
 }
 
-function checkOptions(o: Required<Omit<TallyOptions, 'packGrams'>> & { packGrams?: number }): Diagnostic[] {
+function checkOptions(o: Required<Omit<TallyOptions, 'packGrams'>> & Pick<TallyOptions, 'packGrams'>): Diagnostic[] {
   const out: Diagnostic[] = [];
   if (!(o.spare >= 0)) out.push(optionProblem(`the spare margin must be 0% or more, not ${o.spare * 100}%.`));
   if (o.packGrams !== undefined && !(o.packGrams > 0)) out.push(optionProblem(`a pack must hold more than 0 g, not ${o.packGrams} g.`));
@@ -104,7 +105,7 @@ export function buyAmount(highGrams: number, spare: number, packGrams?: number):
 
 export function tally(model: Model, options: TallyOptions): Result<Tally> {
   const o = {
-    beadsPerGram: options.beadsPerGram,
+    beadsPerGram: options.beadsPerGram ?? beadSize(model.header.beads.size, model.header.beads.shape).perGram,
     spare: options.spare ?? DEFAULT_SPARE,
     packGrams: options.packGrams,
     workingLengthMm: options.workingLengthMm ?? DEFAULT_WORKING_LENGTH_MM,

@@ -85,3 +85,27 @@ describe('buy amount', () => {
     expect(buyAmount(10, 0.1, 5)).toBe(15);
   });
 });
+
+describe('fourfold.tally/1 JSON shape', () => {
+  // Source: PRODUCT.md, "JSON shapes that other tools rely on": every key, and no others.
+  it('has exactly the keys PRODUCT.md lists, at every level', () => {
+    const t = JSON.parse(JSON.stringify(tally(stripModel(), { beadsPerGram: BPG }).value)) as Record<string, unknown>;
+    const keys = (o: unknown) => Object.keys(o as object).sort();
+    expect(keys(t)).toEqual(['beads', 'colors', 'rows', 'schema', 'size', 'spare', 'thread', 'title', 'units']);
+    expect(t.schema).toBe('fourfold.tally/1');
+    expect((t.rows as unknown[]).map(keys)).toEqual([['beads', 'row', 'units']]);
+    for (const c of t.colors as Record<string, unknown>[]) {
+      expect(keys(c)).toEqual(['buyGrams', 'count', 'grams', 'hex', 'key', 'name']);
+      expect(keys(c.grams)).toEqual(['high', 'low']);
+    }
+    expect(keys(t.thread)).toEqual(['mm', 'threads']);
+    expect(keys(t.size)).toEqual(['heightMm', 'widthMm']);
+    for (const n of [t.beads, t.units, t.spare]) expect(typeof n).toBe('number');
+  });
+
+  it('takes beads per gram from the bead-size table when none is given', () => {
+    const t = tally(stripModel(), {}).value;
+    expect(t.colors[0]!.grams.low).toBeGreaterThan(0);
+    expect(t.colors[0]!.grams.low).toBeLessThanOrEqual(t.colors[0]!.grams.high);
+  });
+});
