@@ -1,0 +1,56 @@
+/**
+ * Every example's model against its golden JSON, and every model (examples
+ * and generated shapes) against the published JSON Schema, validated with
+ * ajv (a reference JSON Schema 2020-12 validator).
+ */
+import { describe, expect, test } from 'vitest';
+import { existsSync, mkdirSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { Ajv2020 } from 'ajv/dist/2020.js';
+import { compile } from '../../shared/compile.js';
+import { compileAst } from '../../shared/weave-model.js';
+import type { Model } from '../../shared/model.js';
+import { fanRows, panelRows, pattern, tubeRows } from './build-ast.js';
+
+const schema = JSON.parse(readFileSync('shared/schema/model.schema.json', 'utf8')) as object;
+const validate = new Ajv2020({ allErrors: true, strict: true }).compile(schema);
+const valid = (m: Model) => {
+  const ok = validate(JSON.parse(JSON.stringify(m)));
+  return ok ? [] : validate.errors!.map((e) => `${e.instancePath} ${e.message ?? ''}`);
+};
+
+const examples = existsSync('examples') ? readdirSync('examples').filter((f) => f.endsWith('.ffp')).sort() : [];
+const goldenDir = 'tests/engine/golden';
+
+describe.runIf(examples.length > 0)('examples', () => {
+  test.each(examples)('%s: model matches its golden JSON and the schema', (file) => {
+    const { value } = compile(readFileSync(join('examples', file), 'utf8'));
+    expect(valid(value.model)).toEqual([]);
+    const text = `${JSON.stringify(value.model, null, 1)}\n`;
+    const golden = join(goldenDir, file.replace(/\.ffp$/, '.model.json'));
+    if (!existsSync(golden) || process.env.UPDATE_GOLDEN === '1') {
+      mkdirSync(goldenDir, { recursive: true });
+      writeFileSync(golden, text);
+    }
+    expect(text).toBe(readFileSync(golden, 'utf8'));
+  });
+});
+
+describe('schema', () => {
+  test.each([
+    ['panel', pattern('flat', panelRows(4, 3))],
+    ['fan', pattern('flat', fanRows(4))],
+    ['tube', pattern('tube', tubeRows(5, 3))],
+    ['round with increases', pattern('round', ['AAAA AAA AA', 'AAA +AAA AA +AAA A', 'BBB BB BB BB BB B'])],
+    ['broken rows', pattern('flat', ['AAAA AAA AAA', 'AAA AAA AA', 'AAA AA'])],
+    ['placed order', pattern('flat', ['DABC ACB CAB'], 'placed')],
+  ])('%s validates', (_name, ast) => {
+    expect(valid(compileAst(ast).value.model)).toEqual([]);
+  });
+
+  test('the schema rejects a model that breaks it', () => {
+    const m = compileAst(pattern('flat', panelRows(2, 2))).value.model;
+    const broken = { ...m, beads: m.beads.map((b, i) => (i === 0 ? { ...b, units: [0, 1, 2] } : b)) };
+    expect(valid(broken as Model)).not.toEqual([]);
+  });
+});
