@@ -2,9 +2,17 @@
  * Charts, tally, steps, kit and model of a stored version, through the same
  * public functions the CLI uses, so downloads match the CLI byte for byte.
  */
+import { z } from 'zod';
+import { renderChartSvg } from '../bin/render/chart-files.js';
+import { svgToPng, DEFAULT_DPI } from '../bin/render/png.js';
+import { hasErrors } from '../shared/diagnostic.js';
+import { renderKitHtml, renderKitMarkdown } from '../shared/kit.js';
 import type { Model } from '../shared/model.js';
-import type { Tally } from '../shared/tally.js';
+import { buildSteps } from '../shared/steps.js';
+import { renderStepsHtml, renderStepsMarkdown, renderStepsText } from '../shared/steps-render.js';
+import { DEFAULT_TAIL_MM, DEFAULT_WORKING_LENGTH_MM, tally, type Tally } from '../shared/tally.js';
 import { HttpError } from './errors.js';
+import { check } from './validate.js';
 
 export interface Rendered {
   type: string;
@@ -13,14 +21,70 @@ export interface Rendered {
 
 export type ViewKind = 'chart.svg' | 'chart.png' | 'tally' | 'steps' | 'kit' | 'model';
 
-const notAvailable = (what: string) => new HttpError(501, 'not-available', `${what} is not available on this server yet.`);
+const flag = z.enum(['1', 'true', '0', 'false']).transform((v) => v === '1' || v === 'true');
+const chartQuery = z.object({
+  theme: z.enum(['light', 'dark', 'print']).optional(),
+  numbers: flag.optional(),
+  thread: z.coerce.number().int().min(1).max(1_000_000).optional(),
+  scale: z.literal('mm').optional(),
+  dpi: z.coerce.number().int().min(24).max(600).optional(),
+});
+const stepsQuery = z.object({ format: z.enum(['json', 'text', 'md', 'html']).default('json') });
+const kitQuery = z.object({ format: z.enum(['md', 'html']).default('md') });
 
-export function tallyOf(_model: Model): Tally | null {
-  return null;
+const json = (value: unknown): Rendered => ({ type: 'application/json; charset=utf-8', body: `${JSON.stringify(value, null, 2)}\n` });
+
+/** The tally of an error-free model, or null: like the CLI, no material list for a pattern that does not build. */
+export function tallyOf(model: Model): Tally | null {
+  if (hasErrors(model.diagnostics)) return null;
+  const result = tally(model, {});
+  return hasErrors(result.diagnostics) ? null : result.value;
 }
 
-export async function renderView(kind: ViewKind, model: Model | null, _query: Record<string, unknown>): Promise<Rendered> {
+function needsClean(model: Model): void {
+  if (hasErrors(model.diagnostics)) {
+    throw new HttpError(422, 'has-errors', 'This version has errors; fix them first, a partial list would mislead.');
+  }
+}
+
+export async function renderView(kind: ViewKind, model: Model | null, query: Record<string, unknown>): Promise<Rendered> {
   if (!model) throw new HttpError(422, 'no-model', 'This version could not be built, so there is nothing to draw or count.');
-  if (kind === 'model') return { type: 'application/json; charset=utf-8', body: JSON.stringify(model) };
-  throw notAvailable(kind);
+  switch (kind) {
+    case 'model':
+      return json(model);
+    case 'chart.svg':
+    case 'chart.png': {
+      const { dpi, ...options } = check(chartQuery, query);
+      const { svg, diagnostics } = await renderChartSvg(model, options);
+      if (hasErrors(diagnostics)) throw new HttpError(400, 'invalid-input', diagnostics[0]!.message, diagnostics);
+      return kind === 'chart.svg'
+        ? { type: 'image/svg+xml; charset=utf-8', body: svg }
+        : { type: 'image/png', body: await svgToPng(svg, dpi ?? DEFAULT_DPI) };
+    }
+    case 'tally': {
+      needsClean(model);
+      const t = tallyOf(model);
+      if (!t) throw new HttpError(422, 'has-errors', 'The tally could not be made for this version.');
+      return json(t);
+    }
+    case 'steps': {
+      needsClean(model);
+      const { format } = check(stepsQuery, query);
+      const doc = buildSteps(model);
+      if (format === 'json') return json(doc);
+      if (format === 'md') return { type: 'text/markdown; charset=utf-8', body: renderStepsMarkdown(doc) };
+      if (format === 'html') return { type: 'text/html; charset=utf-8', body: renderStepsHtml(doc) };
+      return { type: 'text/plain; charset=utf-8', body: renderStepsText(doc) };
+    }
+    case 'kit': {
+      needsClean(model);
+      const { format } = check(kitQuery, query);
+      const t = tallyOf(model);
+      if (!t) throw new HttpError(422, 'has-errors', 'The kit sheet could not be made for this version.');
+      const options = { workingLengthMm: DEFAULT_WORKING_LENGTH_MM, tailMm: DEFAULT_TAIL_MM };
+      return format === 'html'
+        ? { type: 'text/html; charset=utf-8', body: renderKitHtml(model, t, options) }
+        : { type: 'text/markdown; charset=utf-8', body: renderKitMarkdown(model, t, options) };
+    }
+  }
 }

@@ -23,8 +23,8 @@ async function send(res: Response, deps: AppDeps, pattern: PatternInstance, kind
   const shown = await findVersion(deps.db.models, pattern, version);
   const model = shown.model ? (JSON.parse(shown.model) as Model) : null;
   const out = await renderView(kind, model, query);
-  if (kind === 'chart.svg') {
-    // A chart is data, never a document that may run script or be sniffed as HTML.
+  if (/^(image\/svg|text\/html)/.test(out.type)) {
+    // A chart or a printable page is shown, never a document that may run script with the API's rights.
     res.setHeader('Content-Security-Policy', 'sandbox');
   }
   res.setHeader('X-Content-Type-Options', 'nosniff');
