@@ -69,13 +69,15 @@ function placeWords(place: Place, heading: Heading, layout: Layout): string {
 
 function cueWords(place: Place, heading: Heading, layout: Layout): string {
   const where = placeWords(place, heading, layout);
-  return place === 'top' ? 'first bead on top' : `first bead on the ${where}`;
+  if (place === 'top' && layout !== 'round') return 'first bead on top';
+  if (place === 'base' && layout !== 'round') return 'first bead at the bottom';
+  return `first bead on the ${where}`;
 }
 
-function directionWords(heading: Heading, word: 'row' | 'round'): string {
+function directionWords(heading: Heading, word: 'row' | 'round', first: boolean): string {
   if (heading === 'right') return 'working left to right';
   if (heading === 'left') return 'working right to left';
-  return `working round, the same way as the ${word} before`;
+  return first ? 'working round' : `working round, the same way as the ${word} before`;
 }
 
 const GLOSSARY = {
@@ -169,7 +171,7 @@ function buildRow(ctx: Ctx, row: RowInfo, stepOf: Map<number, UnitStep>): StepRo
     units: row.units.length,
     // Counted from the pick-ups printed, so the header always matches the lines below it.
     beads: steps.reduce((n, s) => n + s.round.filter((m) => m.kind === 'pickup').reduce((k, m) => k + m.beads.length, 0), 0),
-    direction: directionWords(row.heading, row.word),
+    direction: directionWords(row.heading, row.word, row.row === 1),
     notes: row.notes,
     steps,
   };
