@@ -5,18 +5,22 @@
  */
 import { open } from 'node:fs/promises';
 import { resolve } from 'node:path';
-import { fileStart, type Diagnostic } from '../shared/diagnostic.js';
+import { sortDiagnostics, type Diagnostic } from '../shared/diagnostic.js';
+import { formatDiagnostics } from '../shared/format-diagnostics.js';
+import { MAX_BYTES } from '../parser/limits.js';
+import type { Compiled } from '../shared/compile.js';
 import type { CliIO } from './command.js';
+import { EXIT_FAILURE, EXIT_PATTERN_ERRORS, useColor } from './command.js';
 
 /** What a diagnostic calls standard input. */
 export const STDIN_NAME = '<stdin>';
 
 /**
- * Files over 1 MiB are refused by the parser (NOTATION.md section 7). Reading
- * one byte past the limit is enough for it to say so, without reading a huge
- * file into memory.
+ * Files over the parser's limit are refused by it anyway. Reading one byte
+ * past the limit is enough for it to say so, without reading a huge file
+ * into memory.
  */
-const READ_LIMIT = 1024 * 1024 + 1;
+const READ_LIMIT = MAX_BYTES + 1;
 
 export interface Input {
   /** The name to show in messages: the path as given, or `<stdin>`. */
@@ -84,16 +88,48 @@ export interface PatternText {
 export async function readPattern(path: string, io: CliIO): Promise<PatternText | { error: string }> {
   const input = await readInput(path, io);
   if ('error' in input) return input;
+  let text: string | null = null;
   try {
-    return { file: input.file, text: new TextDecoder('utf-8', { fatal: true }).decode(input.bytes), diagnostics: [] };
+    text = new TextDecoder('utf-8', { fatal: true }).decode(input.bytes);
   } catch {
-    const diagnostic: Diagnostic = {
-      severity: 'error',
-      id: 'not-text',
-      message: 'this file is not UTF-8 text',
-      range: fileStart,
-      hint: 'save the pattern as plain text in UTF-8 (most editors offer it under "Save as" or "Encoding")',
-    };
-    return { file: input.file, text: new TextDecoder('utf-8').decode(input.bytes), diagnostics: [diagnostic] };
+    text = null;
   }
+  if (text !== null && !text.includes('\0')) return { file: input.file, text, diagnostics: [] };
+  // Not text: the parser says why, in its own words; the lossy text only feeds the code frame.
+  const lossy = new TextDecoder('utf-8').decode(input.bytes);
+  const { parseBytes } = await import('../parser/index.js');
+  return { file: input.file, text: lossy, diagnostics: parseBytes(input.bytes).diagnostics };
+}
+
+/**
+ * Diagnostics of one file in the human form, on standard error, coloured
+ * only on a terminal and never with NO_COLOR; a blank line after each file.
+ */
+export function printDiagnostics(file: string, text: string, diagnostics: readonly Diagnostic[], io: CliIO): void {
+  if (diagnostics.length === 0) return;
+  io.stderr.write(
+    `${formatDiagnostics(sortDiagnostics(diagnostics), text, file, { color: useColor(io, 'stderr') })}\n`,
+  );
+}
+
+/**
+ * Read, decode and compile one pattern, printing its diagnostics: what most
+ * commands start with. A number is the exit code to return when there is
+ * nothing to work with (2: unreadable; 1: not text). The engine is loaded
+ * only here, so commands that never compile stay light.
+ */
+export async function compilePattern(path: string, io: CliIO): Promise<(PatternText & { value: Compiled }) | number> {
+  const input = await readPattern(path, io);
+  if ('error' in input) {
+    io.stderr.write(`${input.error}\n`);
+    return EXIT_FAILURE;
+  }
+  if (input.diagnostics.length > 0) {
+    printDiagnostics(input.file, input.text, input.diagnostics, io);
+    return EXIT_PATTERN_ERRORS;
+  }
+  const { compile } = await import('../shared/compile.js');
+  const { value, diagnostics } = compile(input.text);
+  printDiagnostics(input.file, input.text, diagnostics, io);
+  return { ...input, value, diagnostics };
 }
