@@ -6,7 +6,7 @@
 import { SMALL_PARTS_CAUTION } from './caution.js';
 import { escapeHtml, htmlPage, md as mdCell, swatchHtml } from './steps-render.js';
 import type { Model } from './model.js';
-import type { Tally } from './tally.js';
+import { MM_PER_INCH, type Tally } from './tally.js';
 
 export interface KitOptions {
   packGrams?: number;
@@ -31,6 +31,7 @@ export function toolSuggestion(size: string): { needle: string; thread: string }
 }
 
 const cm = (mm: number): string => `${Math.round(mm / 10)} cm`;
+const inch = (mm: number): string => (mm / MM_PER_INCH).toFixed(2);
 
 function buyWords(buyGrams: number, packGrams?: number): string {
   if (packGrams === undefined) return `${buyGrams} g`;
@@ -56,7 +57,7 @@ function kitContent(model: Model, t: Tally, o: KitOptions): KitContent {
     about: [
       ...(model.header.designer ? [`Design by ${model.header.designer}.`] : []),
       `${size} ${model.header.beads.shape} seed beads; ${t.beads} beads in all, ${t.units} units.`,
-      `Finished size about ${t.size.widthMm} x ${t.size.heightMm} mm.`,
+      `Finished size about ${t.size.widthMm} x ${t.size.heightMm} mm (${inch(t.size.widthMm)} x ${inch(t.size.heightMm)} in).`,
       `Buy amounts include a ${spare}% spare for misshapen beads${o.packGrams ? `, in whole packs of ${o.packGrams} g` : ''}.`,
     ],
     // A colour the pattern never uses is a palette slip (the engine warns); nothing to buy.

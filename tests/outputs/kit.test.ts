@@ -15,6 +15,8 @@ describe('kit sheet', () => {
     const out = renderKitMarkdown(model, t, options);
     expect(out).toContain('| A | #f4f1ea | chalk | 2 | 0.02-0.02 g | 1 g |');
     expect(out).not.toContain('unused');
+    // 7.6 mm and 3.8 mm at 25.4 mm to the inch.
+    expect(out).toContain('7.6 x 3.8 mm (0.30 x 0.15 in)');
   });
 
   it('buys whole packs when a pack size is given', () => {
