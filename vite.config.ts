@@ -36,6 +36,7 @@ export default defineConfig({
           root: '.',
           environment: 'jsdom',
           include: ['tests/web/**/*.test.{ts,tsx}'],
+          setupFiles: ['tests/web/setup.ts'],
         },
       },
       {
