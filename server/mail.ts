@@ -39,7 +39,8 @@ export function readMessage(raw: string): { subject: string; text: string } {
   const split = raw.indexOf('\r\n\r\n');
   const head = split < 0 ? raw : raw.slice(0, split);
   const body = split < 0 ? '' : raw.slice(split + 4);
-  const headers = head.replace(/\r\n[ \t]+/g, ' ');
+  // Unfold (RFC 5322 2.2.3), then join adjacent encoded words (RFC 2047 6.2 ignores the space between them).
+  const headers = head.replace(/\r\n(?=[ \t])/g, '').replace(/\?=[ \t]+=\?/g, '?==?');
   const subject = decodeWords(/^subject: (.*)$/im.exec(headers)?.[1] ?? '');
   const base64 = /^content-transfer-encoding: base64$/im.test(headers);
   return { subject, text: base64 ? Buffer.from(body.replace(/\s+/g, ''), 'base64').toString('utf8') : body };
