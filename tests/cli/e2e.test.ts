@@ -1,0 +1,66 @@
+/**
+ * The built CLI as a user runs it: `node bin/fourfold.js ...` in a child
+ * process, so the launcher, the exit code and the streams are the real ones.
+ */
+import { existsSync, readFileSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
+import { execa } from 'execa';
+import { beforeAll, describe, expect, it } from 'vitest';
+
+const root = fileURLToPath(new URL('../../', import.meta.url));
+const fixtures = fileURLToPath(new URL('./fixtures/', import.meta.url));
+const launcher = `${root}bin/fourfold.js`;
+const pkg = JSON.parse(readFileSync(`${root}package.json`, 'utf8')) as { version: string };
+
+const fourfold = (args: string[], input?: string) =>
+  execa('node', [launcher, ...args], { cwd: fixtures, input, reject: false });
+
+beforeAll(async () => {
+  // tsc emits even when a file elsewhere has type errors; what matters here is that the CLI is there.
+  await execa('npm', ['run', 'build:cli'], { cwd: root, reject: false });
+  expect(existsSync(`${root}dist/bin/main.js`)).toBe(true);
+}, 180_000);
+
+describe('the built fourfold command', () => {
+  it('--version prints the package version', async () => {
+    const r = await fourfold(['--version']);
+    expect(r.exitCode).toBe(0);
+    expect(r.stdout).toBe(pkg.version);
+  });
+
+  it('check on a broken pattern: exit 1, every mistake on stderr, no colour through a pipe', async () => {
+    const r = await fourfold(['check', 'broken.ffp', 'strip.ffp']);
+    expect(r.exitCode).toBe(1);
+    expect(r.stderr).toContain('broken.ffp:10:12: error[bead-count]');
+    expect(r.stderr).toContain('broken.ffp:11:5: error[row-number]');
+    expect(r.stderr).not.toMatch(/\x1b\[/);
+  });
+
+  it('check - reads standard input; --format json goes to stdout', async () => {
+    const r = await fourfold(['check', '-', '--format', 'json'], readFileSync(`${fixtures}strip.ffp`, 'utf8'));
+    expect(r.exitCode).toBe(0);
+    expect(JSON.parse(r.stdout)).toEqual({
+      schema: 'fourfold.check/1',
+      files: [{ file: '<stdin>', ok: true, diagnostics: [] }],
+    });
+  });
+
+  it('a missing file: exit 2, one line, no stack trace', async () => {
+    const r = await fourfold(['check', 'missing.ffp']);
+    expect(r.exitCode).toBe(2);
+    expect(r.stderr).toContain("fourfold: cannot read 'missing.ffp': no such file or folder");
+    expect(r.stderr).not.toMatch(/\n\s+at /);
+  });
+
+  it('a bad option value: exit 2 with the allowed values', async () => {
+    const r = await fourfold(['chart', 'strip.ffp', '--theme', 'neon']);
+    expect(r.exitCode).toBe(2);
+    expect(r.stderr).toContain('Allowed choices are light, dark, print');
+  });
+
+  it('model prints JSON that parses', async () => {
+    const r = await fourfold(['model', 'strip.ffp']);
+    expect(r.exitCode).toBe(0);
+    expect((JSON.parse(r.stdout) as { schema: string }).schema).toBe('fourfold.model/1');
+  });
+});
