@@ -1,0 +1,80 @@
+import { describe, expect, it, vi } from 'vitest';
+import { fireEvent, render, screen } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { ChartView } from '../../web/src/components/chart-view.js';
+import { localTally } from '../../web/src/lib/compiled.js';
+import { zoomAt, pan, MAX_ZOOM, type Box } from '../../web/src/lib/zoom.js';
+import { beadInfo } from '../../web/src/lib/bead-info.js';
+import { modelOf } from './helpers.js';
+
+// Source: NOTATION.md section 8, a flat panel of n units by r rows has n(r+1) + r(n+1) beads.
+const n = 3;
+const r = 2;
+const panel = 'title: Chart Panel\ncolors:\n  A #f4f1ea chalk\n  B #2e6f8e deep teal\nrow 1: BBBB AAA BBB\nrow 2: AAA BB AA\n';
+
+describe('chart view', () => {
+  it('draws one element per bead, as many as the tally counts and the closed form gives', () => {
+    const model = modelOf(panel);
+    const { container } = render(<ChartView model={model} dark={false} />);
+    const beads = container.querySelectorAll('[data-bead]');
+    expect(beads).toHaveLength(n * (r + 1) + r * (n + 1));
+    expect(beads).toHaveLength(localTally(model).beads);
+    // The box has the chart's proportions before and after drawing, so nothing below it moves.
+    const box = screen.getByTestId('chart');
+    expect(box.style.aspectRatio).toMatch(/^\d+(\.\d+)? \/ \d+(\.\d+)?$/);
+  });
+
+  it('outlines the current unit’s beads, draws only its thread passes, and picks a unit from a clicked bead', () => {
+    const model = modelOf(panel);
+    const onPick = vi.fn();
+    const current = model.rows[1]!.units[1]!;
+    const { container } = render(<ChartView model={model} dark={false} current={current} onPick={onPick} />);
+    const outlined = [...container.querySelectorAll('.ff-bead.ff-highlight')].map((el) => Number(el.getAttribute('data-bead')));
+    const picked = model.steps.find((s) => s.unit === current)!.actions.filter((a) => a.kind === 'pickup').map((a) => a.bead);
+    expect(outlined.sort()).toEqual([...picked].sort());
+    const passes = model.thread.filter((p) => p.unit === current).length;
+    expect(container.querySelectorAll('.ff-thread-overlay .ff-thread')).toHaveLength(passes);
+
+    const bead = model.beads.find((b) => b.units[0] === model.rows[0]!.units[2])!;
+    const el = container.querySelector(`[data-bead="${bead.id}"]`)!;
+    fireEvent.pointerDown(el, { clientX: 5, clientY: 5 });
+    fireEvent.pointerUp(el, { clientX: 5, clientY: 5 });
+    expect(onPick).toHaveBeenCalledWith(bead.units[0]);
+  });
+
+  it('zooms with the buttons by changing the viewBox only', async () => {
+    const model = modelOf(panel);
+    const { container } = render(<ChartView model={model} dark={false} />);
+    const svg = container.querySelector('svg')!;
+    const before = svg.getAttribute('viewBox')!.split(' ').map(Number);
+    const count = container.querySelectorAll('[data-bead]').length;
+    await userEvent.click(screen.getByRole('button', { name: 'Zoom in' }));
+    const after = svg.getAttribute('viewBox')!.split(' ').map(Number);
+    expect(after[2]).toBeCloseTo(before[2]! / 1.25, 5);
+    expect(container.querySelectorAll('[data-bead]')).toHaveLength(count);
+    await userEvent.click(screen.getByRole('button', { name: 'Fit' }));
+    expect(svg.getAttribute('viewBox')!.split(' ').map(Number)).toEqual(before);
+  });
+
+  it('tells where a bead sits in each unit that holds it, and its colour', () => {
+    const model = modelOf(panel);
+    const shared = model.beads.find((b) => b.units.length === 2)!;
+    const info = beadInfo(model, shared.id)!;
+    expect(info.lines).toHaveLength(3);
+    expect(info.lines[2]).toMatch(/^Colour [AB] (chalk|deep teal) \(#[0-9a-f]{6}\)$/);
+  });
+});
+
+describe('zoom arithmetic', () => {
+  const full: Box = { x: 0, y: 0, w: 200, h: 100 };
+  it('keeps the point under the pointer fixed and stays inside the chart', () => {
+    const z = zoomAt(full, full, 2, 50, 50);
+    expect(z).toEqual({ x: 25, y: 25, w: 100, h: 50 });
+    // The point at 50 was a quarter across the view before, and is a quarter across after: (50 - 25) / 100.
+    expect((50 - z.x) / z.w).toBeCloseTo(50 / 200, 10);
+    expect(zoomAt(full, full, 1000, 0, 0).w).toBeCloseTo(200 / MAX_ZOOM, 10);
+    expect(zoomAt(full, full, 0.1, 0, 0)).toEqual(full);
+    expect(pan(z, full, -1000, 0).x).toBe(0);
+    expect(pan(z, full, 1000, 1000)).toEqual({ x: 100, y: 50, w: 100, h: 50 });
+  });
+});
