@@ -104,6 +104,7 @@ function glossary(model: Model): StepsDoc['glossary'] {
 interface Ctx {
   model: Model;
   names: Map<string, string>;
+  rows: Map<number, RowInfo>;
 }
 
 function placeOf(unit: Unit, bead: number): Place | null {
@@ -119,16 +120,16 @@ function beadRef(ctx: Ctx, bead: number, where: string): BeadRef {
 /** Names a bead from where the beader's needle is: this unit, the next, or by row and unit. */
 function locate(ctx: Ctx, bead: number, unit: Unit, next: Unit | undefined): string {
   const { model } = ctx;
-  const heading = model.rows.find((r) => r.row === unit.row)?.heading ?? 'right';
+  const heading = ctx.rows.get(unit.row)?.heading ?? 'right';
   const here = placeOf(unit, bead);
   if (here) return placeWords(here, heading, model.layout.kind);
   const there = next ? placeOf(next, bead) : null;
   if (next && there) return `${placeWords(there, heading, model.layout.kind)} of the next unit`;
   const holder = model.units[model.beads[bead]?.units[0] ?? -1];
   if (!holder) return 'bead';
-  const holderHeading = model.rows.find((r) => r.row === holder.row)?.heading ?? 'right';
+  const row = ctx.rows.get(holder.row);
   const p = placeOf(holder, bead) ?? 'top';
-  return `${placeWords(p, holderHeading, model.layout.kind)} of ${model.rows.find((r) => r.row === holder.row)?.word ?? 'row'} ${holder.row}, unit ${holder.index}`;
+  return `${placeWords(p, row?.heading ?? 'right', model.layout.kind)} of ${row?.word ?? 'row'} ${holder.row}, unit ${holder.index}`;
 }
 
 function roundMoves(ctx: Ctx, step: UnitStep, heading: Heading): StepMove[] {
@@ -178,7 +179,11 @@ function buildRow(ctx: Ctx, row: RowInfo, stepOf: Map<number, UnitStep>): StepRo
 }
 
 export function buildSteps(model: Model): StepsDoc {
-  const ctx: Ctx = { model, names: new Map(model.palette.map((p) => [p.key, p.name])) };
+  const ctx: Ctx = {
+    model,
+    names: new Map(model.palette.map((p) => [p.key, p.name])),
+    rows: new Map(model.rows.map((r) => [r.row, r])),
+  };
   const stepOf = new Map(model.steps.map((s) => [s.unit, s]));
   return {
     schema: 'fourfold.steps/1',
