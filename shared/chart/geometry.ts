@@ -44,12 +44,15 @@ export function cornerJunction(model: Model, unit: Unit, corner: Corner): number
 }
 
 /**
- * The cell outline in model coordinates: the four corner junctions when every
- * place is built, else a unit square turned by the unit's angle (a failed unit).
+ * The cell outline in model coordinates. In a round, cells are not squares,
+ * so the four corner junctions give the outline when every place is built;
+ * elsewhere (and for a failed unit) it is the unit square turned by the
+ * unit's angle, which also keeps a tube's closing unit from reaching across
+ * the unrolled chart to its far bead at the seam.
  */
 export function cellOutline(model: Model, unit: Unit): Point[] {
   const found = corners.map((c) => cornerJunction(model, unit, c));
-  if (found.every((j) => j !== null)) {
+  if (model.layout.kind === 'round' && found.every((j) => j !== null)) {
     return found.map((j) => {
       const junction = model.junctions[j as number]!;
       return { x: junction.x, y: junction.y };
@@ -81,4 +84,16 @@ export function arrowhead(tip: Point, dir: Point, size: number): string {
     [tip, { x: back.x - dir.y * half, y: back.y + dir.x * half }, { x: back.x + dir.y * half, y: back.y - dir.x * half }],
     true,
   );
+}
+
+/**
+ * On an unrolled tube the closing unit's far side is drawn at the seam, a
+ * whole circumference away; this gives the copy of `p` next to `ref`.
+ */
+export function nearImage(model: Model, p: Point, ref: Point): Point {
+  if (model.layout.kind !== 'tube') return p;
+  const width = model.layout.bounds.maxX - model.layout.bounds.minX;
+  if (p.x - ref.x > 0.75) return { x: p.x - width, y: p.y };
+  if (ref.x - p.x > 0.75) return { x: p.x + width, y: p.y };
+  return p;
 }

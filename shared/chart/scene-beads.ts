@@ -4,7 +4,7 @@
  */
 import type { Model, Unit, UnitStep } from '../model.js';
 import { labelColor } from './contrast.js';
-import { arrowhead, cellOutline, cornerJunction, pointPath, round2, toPage, unitVector, type PageTransform } from './geometry.js';
+import { arrowhead, cellOutline, cornerJunction, nearImage, pointPath, round2, toPage, unitVector, type PageTransform } from './geometry.js';
 import type { BeadPrim, PathPrim, TextPrim } from './scene-types.js';
 import type { Theme } from './themes.js';
 
@@ -71,8 +71,8 @@ function cue(model: Model, unit: Unit, step: UnitStep, t: PageTransform, theme: 
   if (!bead || !corner) return null;
   const other = model.junctions[bead.junctions[0] === junction ? bead.junctions[1] : bead.junctions[0]];
   if (!other) return null;
-  const c = toPage(t, corner);
-  const along = unitVector(c, toPage(t, other));
+  const c = toPage(t, nearImage(model, corner, unit));
+  const along = unitVector(c, toPage(t, nearImage(model, other, unit)));
   const centre = toPage(t, unit);
   // Step off the bead toward the cell's middle, so the mark never covers a bead.
   const toMid = { x: centre.x - c.x, y: centre.y - c.y };

@@ -1,0 +1,20 @@
+/**
+ * Write a file so that no reader ever sees half of it: write beside it under
+ * a temporary name, then rename (atomic on one file system). An interrupted
+ * run leaves at most a stray `.tmp` file, never a truncated chart.
+ */
+import { randomBytes } from 'node:crypto';
+import { mkdir, rename, rm, writeFile } from 'node:fs/promises';
+import { dirname } from 'node:path';
+
+export async function writeFileAtomic(path: string, data: string | Uint8Array): Promise<void> {
+  await mkdir(dirname(path), { recursive: true });
+  const temp = `${path}.${process.pid}-${randomBytes(4).toString('hex')}.tmp`;
+  try {
+    await writeFile(temp, data);
+    await rename(temp, path);
+  } catch (error) {
+    await rm(temp, { force: true });
+    throw error;
+  }
+}

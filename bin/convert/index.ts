@@ -1,0 +1,95 @@
+/**
+ * Batch conversion: PATHS... to outputs under one folder, on every core
+ * through a piscina worker pool. The CLI's `convert` and the server's start
+ * script both call `convertPaths`.
+ */
+import { existsSync } from 'node:fs';
+import { availableParallelism } from 'node:os';
+import { fileURLToPath } from 'node:url';
+import { resolve } from 'node:path';
+import { Piscina } from 'piscina';
+import { EXIT_FAILURE, EXIT_OK, EXIT_PATTERN_ERRORS } from '../command.js';
+import { convertOne, OUTPUT_FORMATS, type ConvertTask, type FileResult, type OutputFormat } from './convert-one.js';
+import { findInputs } from './find-inputs.js';
+
+export type { FileResult, OutputFormat } from './convert-one.js';
+
+export interface ConvertOptions {
+  out: string;
+  formats?: readonly OutputFormat[];
+  /** Files converted at once; default: all cores. */
+  jobs?: number;
+  force?: boolean;
+  /** Where relative PATHS and --out are resolved; default: the process's. */
+  cwd?: string;
+  /** Told the number of files before the first starts. */
+  onStart?: (total: number) => void;
+  /** Told each file's result as it finishes. */
+  onResult?: (result: FileResult) => void;
+}
+
+export interface ConvertSummary {
+  schema: 'fourfold.convert/1';
+  out: string;
+  converted: number;
+  skipped: number;
+  failed: number;
+  ioErrors: number;
+  /** Every input by its path under --out, sorted; problems with the PATHS themselves come as io-error. */
+  files: FileResult[];
+  /** 0, 1 when a pattern had errors, 2 when a file could not be read or written (2 wins). */
+  exitCode: number;
+}
+
+// Compiled, the worker sits beside this file; from the TypeScript sources there is none to start.
+const workerFile = fileURLToPath(new URL('./worker.js', import.meta.url));
+
+async function runAll(tasks: ConvertTask[], jobs: number, onResult: (r: FileResult) => void): Promise<FileResult[]> {
+  if (jobs > 1 && tasks.length > 1 && existsSync(workerFile)) {
+    const threads = Math.min(jobs, tasks.length);
+    const pool = new Piscina<ConvertTask, FileResult>({ filename: workerFile, minThreads: threads, maxThreads: threads, idleTimeout: 1000 });
+    try {
+      return await Promise.all(tasks.map((task) => pool.run(task).then((r) => (onResult(r), r))));
+    } finally {
+      await pool.destroy();
+    }
+  }
+  // In this thread, still `jobs` files at a time, so reads and writes overlap.
+  const results: FileResult[] = new Array<FileResult>(tasks.length);
+  let next = 0;
+  const lane = async (): Promise<void> => {
+    while (next < tasks.length) {
+      const i = next++;
+      results[i] = await convertOne(tasks[i]!);
+      onResult(results[i]);
+    }
+  };
+  await Promise.all(Array.from({ length: Math.max(1, Math.min(jobs, tasks.length)) }, lane));
+  return results;
+}
+
+export async function convertPaths(paths: readonly string[], options: ConvertOptions): Promise<ConvertSummary> {
+  const cwd = options.cwd ?? process.cwd();
+  const outDir = resolve(cwd, options.out);
+  const formats = OUTPUT_FORMATS.filter((f) => (options.formats ?? OUTPUT_FORMATS).includes(f));
+  const { inputs, problems } = await findInputs(paths, cwd);
+  const tasks = inputs.map((input) => ({ ...input, outDir, formats, force: options.force === true }));
+  options.onStart?.(tasks.length);
+  const results = await runAll(tasks, options.jobs ?? availableParallelism(), options.onResult ?? (() => {}));
+  const files = [...results, ...problems.map((p): FileResult => ({ rel: p.path, status: 'io-error', message: `'${p.path}': ${p.message}` }))].sort((a, b) =>
+    a.rel < b.rel ? -1 : a.rel > b.rel ? 1 : 0,
+  );
+  const count = (status: FileResult['status']) => files.filter((f) => f.status === status).length;
+  const ioErrors = count('io-error');
+  const failed = count('failed');
+  return {
+    schema: 'fourfold.convert/1',
+    out: outDir,
+    converted: count('converted'),
+    skipped: count('skipped'),
+    failed,
+    ioErrors,
+    files,
+    exitCode: ioErrors > 0 ? EXIT_FAILURE : failed > 0 ? EXIT_PATTERN_ERRORS : EXIT_OK,
+  };
+}

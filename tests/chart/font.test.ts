@@ -1,0 +1,69 @@
+import { describe, expect, test } from 'vitest';
+import { readFile } from 'node:fs/promises';
+import { createRequire } from 'node:module';
+import { dirname, join } from 'node:path';
+import { PNG } from 'pngjs';
+import { embeddedFonts, FONT_FAMILY } from '../../bin/render/font.js';
+import { svgToPng } from '../../bin/render/png.js';
+import { woffToSfnt } from '../../bin/render/woff.js';
+
+const require = createRequire(import.meta.url);
+const fontDir = join(dirname(require.resolve('@fontsource/jetbrains-mono/package.json')), 'files');
+
+// Source: OpenType specification, "Calculating checksums": the sum of the
+// table's big-endian uint32 words, zero-padded to 4 bytes, modulo 2^32; the
+// 'head' table is summed with its checksumAdjustment field (bytes 8-11) as 0.
+function tableChecksum(data: Buffer, isHead: boolean): number {
+  const padded = Buffer.alloc((data.length + 3) & ~3);
+  data.copy(padded);
+  if (isHead) padded.writeUInt32BE(0, 8);
+  let sum = 0;
+  for (let i = 0; i < padded.length; i += 4) sum = (sum + padded.readUInt32BE(i)) >>> 0;
+  return sum;
+}
+
+describe('the bundled font', () => {
+  test('WOFF to sfnt: every table is whole, by the checksum the font records for it', async () => {
+    const sfnt = woffToSfnt(await readFile(join(fontDir, 'jetbrains-mono-latin-400-normal.woff')));
+    const numTables = sfnt.readUInt16BE(4);
+    expect(sfnt.readUInt32BE(0)).toBe(0x00010000); // TrueType outlines
+    expect(numTables).toBeGreaterThan(8);
+    const tags: string[] = [];
+    for (let i = 0; i < numTables; i++) {
+      const at = 12 + i * 16;
+      const tag = sfnt.toString('latin1', at, at + 4);
+      tags.push(tag);
+      const [checksum, offset, length] = [sfnt.readUInt32BE(at + 4), sfnt.readUInt32BE(at + 8), sfnt.readUInt32BE(at + 12)];
+      expect(tableChecksum(sfnt.subarray(offset, offset + length), tag === 'head'), tag).toBe(checksum);
+    }
+    expect(tags).toEqual([...tags].sort());
+    expect(tags).toEqual(expect.arrayContaining(['cmap', 'glyf', 'head', 'hmtx', 'loca', 'name']));
+  });
+
+  test('the embedded subset is a small TrueType font, the same bytes every time', async () => {
+    const [regular, bold] = await embeddedFonts('ABC 123');
+    expect([regular!.weight, bold!.weight]).toEqual([400, 700]);
+    expect(regular!.family).toBe(FONT_FAMILY);
+    const bytes = Buffer.from(regular!.base64, 'base64');
+    expect(bytes.readUInt32BE(0)).toBe(0x00010000);
+    expect(bytes.length).toBeLessThan(12_000);
+    const again = await embeddedFonts('ABC 1234');
+    expect(again[0]!.base64).not.toBe(regular!.base64);
+    expect((await embeddedFonts('ABC 123'))[0]!.base64).toBe(regular!.base64);
+  });
+
+  test('PNG text is drawn with the bundled font, system fonts being off', async () => {
+    const svg = (family: string) =>
+      `<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 40 10" width="40mm" height="10mm"><rect width="40" height="10" fill="#ffffff"/><text x="1" y="8" font-size="8" font-family="${family}" fill="#000000">WMW</text></svg>`;
+    const ink = (png: Buffer) => {
+      const image = PNG.sync.read(png);
+      let dark = 0;
+      for (let i = 0; i < image.data.length; i += 4) if (image.data[i]! < 128) dark++;
+      return dark;
+    };
+    const drawn = ink(await svgToPng(svg(`'${FONT_FAMILY}'`), 96));
+    expect(drawn).toBeGreaterThan(200);
+    // An unknown family falls back to the bundled font too, so the glyphs come out the same.
+    expect(ink(await svgToPng(svg('NoSuchFamily, monospace'), 96))).toBe(drawn);
+  });
+});

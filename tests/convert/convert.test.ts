@@ -1,0 +1,112 @@
+import { afterEach, beforeEach, describe, expect, test } from 'vitest';
+import { mkdir, mkdtemp, readdir, readFile, rm, stat, symlink, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { convertPaths, type ConvertSummary } from '../../bin/convert/index.js';
+import { writeFileAtomic } from '../../bin/convert/atomic-write.js';
+import { isWellFormed } from '../chart/svg-tree.js';
+import { BROKEN, FAN, TUBE } from './patterns.js';
+
+let root: string;
+const inDir = () => join(root, 'patterns');
+const outDir = () => join(root, 'out');
+
+async function listFiles(dir: string): Promise<string[]> {
+  const entries = await readdir(dir, { recursive: true, withFileTypes: true });
+  return entries.filter((e) => e.isFile()).map((e) => join(e.parentPath, e.name).slice(dir.length + 1)).sort();
+}
+
+const mtimes = async (files: string[]) => Promise.all(files.map(async (f) => (await stat(join(outDir(), f))).mtimeMs));
+
+const convert = (paths: string[], extra: Partial<Parameters<typeof convertPaths>[1]> = {}): Promise<ConvertSummary> =>
+  convertPaths(paths, { out: 'out', cwd: root, jobs: 2, ...extra });
+
+beforeEach(async () => {
+  root = await mkdtemp(join(tmpdir(), 'fourfold-convert-'));
+  await mkdir(join(inDir(), 'tubes'), { recursive: true });
+  await writeFile(join(inDir(), 'fan.ffp'), FAN);
+  await writeFile(join(inDir(), 'tubes', 'heron.ffp'), TUBE);
+  await writeFile(join(inDir(), 'wren.ffp'), BROKEN);
+  await writeFile(join(inDir(), 'notes.txt'), 'not a pattern');
+});
+
+afterEach(async () => {
+  await rm(root, { recursive: true, force: true });
+});
+
+describe('convert a folder', () => {
+  test('good files converted in a mirrored tree, the broken one reported, exit 1', async () => {
+    const summary = await convert(['patterns']);
+    expect(summary.exitCode).toBe(1);
+    expect([summary.converted, summary.skipped, summary.failed, summary.ioErrors]).toEqual([2, 0, 1, 0]);
+    const wren = summary.files.find((f) => f.rel === 'wren.ffp');
+    expect(wren?.status).toBe('failed');
+    expect(wren?.message).toMatch(/^wren\.ffp:6:\d+: error\[bead-count\]: /);
+
+    const files = await listFiles(outDir());
+    for (const base of ['fan', 'tubes/heron']) {
+      for (const ext of ['svg', 'png', 'md', 'json', 'hash']) expect(files).toContain(`${base}.${ext}`);
+    }
+    // Nothing half-written: no temporary files left, and every output reads whole.
+    expect(files.filter((f) => f.endsWith('.tmp'))).toEqual([]);
+    for (const f of files.filter((f) => f.endsWith('.svg'))) expect(isWellFormed(await readFile(join(outDir(), f), 'utf8'))).toBe(true);
+    for (const f of files.filter((f) => f.endsWith('.json'))) expect(JSON.parse(await readFile(join(outDir(), f), 'utf8')).schema).toBe('fourfold.model/1');
+    // Source: PNG specification (W3C, 2003), section 5.2: the eight-byte signature.
+    for (const f of files.filter((f) => f.endsWith('.png'))) expect([...(await readFile(join(outDir(), f))).subarray(0, 8)]).toEqual([137, 80, 78, 71, 13, 10, 26, 10]);
+    expect(await readFile(join(outDir(), 'fan.md'), 'utf8')).toContain('Linnet Fan');
+  });
+
+  test('a second run skips everything, and touches no output', async () => {
+    await convert(['patterns']);
+    const files = await listFiles(outDir());
+    const before = await mtimes(files);
+    const again = await convert(['patterns']);
+    expect([again.converted, again.skipped, again.failed]).toEqual([0, 2, 1]);
+    expect(again.files.find((f) => f.rel === 'wren.ffp')?.unchanged).toBe(true);
+    expect(again.exitCode).toBe(1);
+    expect(await mtimes(files)).toEqual(before);
+  });
+
+  test('--force redoes all; a changed file or other formats redo only what changed', async () => {
+    await convert(['patterns'], { formats: ['svg'] });
+    expect((await convert(['patterns'], { formats: ['svg'], force: true })).converted).toBe(2);
+    await writeFile(join(inDir(), 'fan.ffp'), FAN.replace('Linnet Fan', 'Linnet Fan II'));
+    const changed = await convert(['patterns'], { formats: ['svg'] });
+    expect(changed.files.filter((f) => f.status === 'converted').map((f) => f.rel)).toEqual(['fan.ffp']);
+    expect((await convert(['patterns'], { formats: ['svg', 'json'] })).converted).toBe(2);
+  });
+
+  test('a dangling symbolic link is a file that cannot be read: exit 2, the rest still converted', async () => {
+    await symlink(join(root, 'nowhere.ffp'), join(inDir(), 'lost.ffp'));
+    const summary = await convert(['patterns'], { formats: ['svg'] });
+    expect(summary.exitCode).toBe(2);
+    expect(summary.converted).toBe(2);
+    const lost = summary.files.find((f) => f.rel === 'lost.ffp');
+    expect(lost?.status).toBe('io-error');
+    expect(lost?.message).toContain('no such file');
+  });
+
+  test('a folder named like a pattern file, given by name, cannot be read: exit 2', async () => {
+    await mkdir(join(root, 'odd.ffp'));
+    const summary = await convert(['odd.ffp', 'patterns/fan.ffp'], { formats: ['svg'] });
+    expect(summary.exitCode).toBe(2);
+    expect(summary.files.find((f) => f.rel === 'odd.ffp')?.message).toContain('folder');
+    expect(summary.converted).toBe(1);
+  });
+
+  test('a glob mirrors the tree below its fixed part', async () => {
+    const summary = await convert(['patterns/**/h*.ffp'], { formats: ['json'] });
+    expect(summary.files.map((f) => [f.rel, f.status])).toEqual([['tubes/heron.ffp', 'converted']]);
+    expect(await listFiles(outDir())).toEqual(['tubes/heron.hash', 'tubes/heron.json']);
+  });
+});
+
+describe('atomic writes', () => {
+  test('a write that cannot finish leaves neither a partial file nor a temporary one', async () => {
+    const target = join(root, 'chart.svg');
+    await mkdir(target); // renaming a file onto a folder fails
+    await expect(writeFileAtomic(target, '<svg/>')).rejects.toThrow();
+    expect(await readdir(root)).toEqual(['chart.svg', 'patterns']);
+    expect((await stat(target)).isDirectory()).toBe(true);
+  });
+});
