@@ -51,28 +51,31 @@ function checkColors(ast: PatternAst, out: Diagnostic[]): void {
       });
     }
   }
-  const used = new Set<string>();
+  // Keys are A-Z, so sets of keys are 26-bit masks: this loop runs once per bead of the file.
+  let defined = 0;
+  for (const k of first.keys()) defined |= bit(k.charCodeAt(0));
+  let used = 0;
   for (const row of ast.rows) {
-    const reported = new Set<string>();
+    let reported = 0;
     forEachUnit(row.items, (u) => {
-      const start = u.range.offset + u.mark.length;
       for (let k = 0; k < u.keys.length; k++) {
+        const b = bit(u.keys.charCodeAt(k));
+        used |= b;
+        if ((defined | reported) & b) continue;
+        reported |= b;
         const key = u.keys[k]!;
-        used.add(key);
-        if (first.has(key) || reported.has(key)) continue;
-        reported.add(key);
         out.push({
           severity: 'error',
           id: 'unknown-color',
           message: `colour key '${key}' is not in the 'colors:' block`,
-          range: narrow(u.range, start + k - u.range.offset, 1),
+          range: narrow(u.range, u.mark.length + k, 1),
           hint: `add a line like '  ${key}  #2e6f8e  teal' under 'colors:', or use one of: ${[...first.keys()].join(' ') || '(none yet)'}`,
         });
       }
     });
   }
   for (const c of ast.colors) {
-    if (used.has(c.key) || first.get(c.key) !== c.range.line) continue;
+    if (used & bit(c.key.charCodeAt(0)) || first.get(c.key) !== c.range.line) continue;
     out.push({
       severity: 'warning',
       id: 'unused-color',
@@ -82,6 +85,8 @@ function checkColors(ast: PatternAst, out: Diagnostic[]): void {
     });
   }
 }
+
+const bit = (code: number): number => 1 << (code - 65);
 
 /** A part of a one-line range, `at` code units in, `length` long (keys are ASCII, so units are columns). */
 const narrow = (r: SourceRange, at: number, length: number): SourceRange => ({
@@ -127,6 +132,7 @@ function checkRowNumbers(rows: readonly RowNode[], out: Diagnostic[]): void {
 
 /** The placement rules for `*`, `+` and `-` (NOTATION.md section 2), one diagnostic per written node. */
 function checkMarks(row: RowNode, layout: Layout, out: Diagnostic[]): void {
+  if (!hasMarkOrSkip(row.items)) return;
   const flat = expandRow(row).value;
   const reported = new Set<object>();
   const report = (node: object & { range: SourceRange }, message: string, hint: string): void => {
@@ -162,3 +168,6 @@ function checkMarks(row: RowNode, layout: Layout, out: Diagnostic[]): void {
     }
   });
 }
+
+const hasMarkOrSkip = (items: readonly ItemNode[]): boolean =>
+  items.some((i) => (i.type === 'group' ? hasMarkOrSkip(i.items) : i.type === 'skip' || i.mark !== ''));

@@ -150,10 +150,58 @@ class AstBuilder extends BaseVisitor {
     const items: ItemNode[] = [];
     const ordered = groups.length === 0 ? toks : mergeByOffset<IToken | CstNode>(toks, groups);
     for (const el of ordered) {
-      const item = 'image' in el ? this.bodyToken(el) : (this.visit(el) as GroupNode | undefined);
-      if (item) items.push(item);
+      if (!('image' in el)) {
+        const group = this.visit(el) as GroupNode | undefined;
+        if (group) items.push(group);
+      } else if (real(el) && el.tokenType.name === 'Units') this.units(el, items);
+      else {
+        const item = this.bodyToken(el);
+        if (item) items.push(item);
+      }
     }
     return items;
+  }
+
+  /**
+   * Split a run of units. The run is ASCII on one line, so columns follow from
+   * offsets; this is the hot loop of a large file, so it scans characters
+   * itself rather than calling out per unit.
+   */
+  private units(t: IToken, out: ItemNode[]): void {
+    const { line, column } = this.ix.position(t.startOffset);
+    const image = t.image;
+    const n = image.length;
+    let k = 0;
+    while (k < n) {
+      const from = k;
+      const c0 = image.charCodeAt(k);
+      const mark = c0 === 42 ? '*' : c0 === 43 ? '+' : '';
+      if (mark !== '') k++;
+      let lower = false;
+      for (let c = image.charCodeAt(k); k < n && c !== 32 && c !== 9; c = image.charCodeAt(++k)) if (c >= 97) lower = true;
+      const offset = t.startOffset + from;
+      const range: SourceRange = { line, column: column + from, endLine: line, endColumn: column + k, offset, endOffset: t.startOffset + k };
+      const written = image.slice(from + mark.length, k);
+      while (k < n && (image.charCodeAt(k) === 32 || image.charCodeAt(k) === 9)) k++;
+      if (written === '') {
+        this.error(range, `'${mark}' needs its colour keys right after it`, `write the unit's keys with no space: '${mark}CCB'`);
+        continue;
+      }
+      const keys = lower ? written.toUpperCase() : written;
+      if (lower) {
+        this.diagnostics.push({
+          severity: 'error',
+          id: 'syntax',
+          message: `colour keys are capital letters: '${mark}${written}' should be '${mark}${keys}'`,
+          range,
+          fix: { title: `write '${mark}${keys}'`, range, replacement: mark + keys },
+        });
+      }
+      if (keys.length > 4) {
+        this.error(range, `'${mark}${written}' has ${keys.length} colour keys, but a unit takes 1 to 4 new beads`, 'leave a space between units');
+      }
+      out.push({ type: 'unit', mark, keys, range });
+    }
   }
 
   private bodyToken(t: IToken): ItemNode | undefined {
@@ -162,8 +210,6 @@ class AstBuilder extends BaseVisitor {
     switch (t.tokenType.name) {
       case 'Dash':
         return { type: 'skip', range };
-      case 'Unit':
-        return this.unit(t.image, range);
       case 'RowNumber':
         this.error(range, `a number cannot stand among the units`, "to repeat units, put them in a group with a count: '(AB CB)x3'");
         return undefined;
@@ -174,29 +220,6 @@ class AstBuilder extends BaseVisitor {
         this.error(range, `'${t.image}' repeats a group, but no group comes before it`, "put the units to repeat in '( )' right before the count: '(AB CB)x2'");
         return undefined;
     }
-  }
-
-  private unit(image: string, range: SourceRange): ItemNode | undefined {
-    const mark = image[0] === '*' || image[0] === '+' ? image[0] : '';
-    const written = image.slice(mark.length);
-    if (written === '') {
-      this.error(range, `'${mark}' needs its colour keys right after it`, `write the unit's keys with no space: '${mark}CCB'`);
-      return undefined;
-    }
-    const keys = written.toUpperCase();
-    if (keys !== written) {
-      this.diagnostics.push({
-        severity: 'error',
-        id: 'syntax',
-        message: `colour keys are capital letters: '${image}' should be '${mark}${keys}'`,
-        range,
-        fix: { title: `write '${mark}${keys}'`, range, replacement: mark + keys },
-      });
-    }
-    if (keys.length > 4) {
-      this.error(range, `'${image}' has ${keys.length} colour keys, but a unit takes 1 to 4 new beads`, 'leave a space between units');
-    }
-    return { type: 'unit', mark, keys, range };
   }
 
   group(ctx: Children): GroupNode | undefined {
@@ -226,21 +249,23 @@ function mergeByOffset<T extends IToken | CstNode>(a: T[], b: T[]): T[] {
   const out: T[] = [];
   let i = 0;
   let j = 0;
+  let nextB = b.length > 0 ? startOf(b[0]!) : Infinity;
   while (i < a.length || j < b.length) {
-    if (j >= b.length || (i < a.length && startOf(a[i]!) <= startOf(b[j]!))) out.push(a[i++]!);
-    else out.push(b[j++]!);
+    if (i < a.length && startOf(a[i]!) <= nextB) out.push(a[i++]!);
+    else {
+      out.push(b[j++]!);
+      nextB = j < b.length ? startOf(b[j]!) : Infinity;
+    }
   }
   return out;
 }
 
+/** Where a token or a line or group node starts: each of those begins with one known token. */
 function startOf(el: IToken | CstNode): number {
   if ('image' in el) return el.startOffset;
-  let best = Infinity;
-  for (const list of Object.values(el.children)) {
-    const first = list[0];
-    if (first) best = Math.min(best, startOf(first));
-  }
-  return best;
+  const c = el.children;
+  const first = (c.LParen ?? c.RowStart ?? c.HeaderKey ?? c.ColorKey)?.[0] as IToken | undefined;
+  return first ? first.startOffset : Infinity;
 }
 
 /** Turn the CST into the AST, placing each line and attaching comments. */

@@ -56,15 +56,21 @@ export const Continuation = createToken({
 /** Tokens that may stand in a row's unit list, kept in one CST array so their order survives. */
 export const BodyToken = createToken({ name: 'BodyToken', pattern: Lexer.NA });
 
-/** A repeat count after a group: `x3`, `x 3`, `×3`, `X3`. Before `Unit` so `x3` is never read as keys. */
+/** A repeat count after a group: `x3`, `x 3`, `×3`, `X3`. Before `Units` so `x3` is never read as keys. */
 export const Times = createToken({ name: 'Times', pattern: /[x×][ \t]*\d+|X\d+/, categories: BodyToken });
 
 /**
- * One whole unit as a single token (`+CCB`, `AB`), not one token per key: a
- * row of a thousand units is a thousand tokens. Lower-case keys are lexed too
- * so the AST step can say "colour keys are capital letters".
+ * A run of units separated by spaces (`*AAAA BA +AAA`) as one token; the AST
+ * step splits it. A row of a thousand plain units is then a handful of
+ * tokens, which keeps lexing and parsing a large file cheap. Lower-case keys
+ * are lexed too, so the AST step can say "colour keys are capital letters";
+ * a word followed by a digit is left for `Times` (`x3`).
  */
-export const Unit = createToken({ name: 'Unit', pattern: /[*+][A-Za-z]*|[A-Za-z]+/, categories: BodyToken });
+export const Units = createToken({
+  name: 'Units',
+  pattern: /(?:[*+][A-Za-z]*|[A-Za-z]+)(?![\w])(?:[ \t]+(?:[*+][A-Za-z]*|[A-Za-z]+)(?![\w]))*[ \t]*/,
+  categories: BodyToken,
+});
 
 /** A skip, or the dash of a row range `rows 2-5`. */
 export const Dash = createToken({ name: 'Dash', pattern: /-/, categories: BodyToken });
@@ -77,7 +83,7 @@ export const RParen = createToken({ name: 'RParen', pattern: /\)/ });
 export const lexerDefinition: { modes: Record<string, TokenType[]>; defaultMode: string } = {
   modes: {
     [LINE]: [Gap, Comment, HeaderKey, RowStart, ColorKey],
-    [ROW]: [Continuation, LineEnd, Blank, Comment, Times, Unit, Dash, RowNumber, Colon, LParen, RParen],
+    [ROW]: [Continuation, LineEnd, Blank, Comment, Times, Units, Dash, RowNumber, Colon, LParen, RParen],
     [TEXT]: [LineEnd, Text],
   },
   defaultMode: LINE,
@@ -85,5 +91,5 @@ export const lexerDefinition: { modes: Record<string, TokenType[]>; defaultMode:
 
 export const allTokens: TokenType[] = [
   Gap, Blank, Comment, HeaderKey, RowStart, ColorKey, Text, LineEnd, Continuation,
-  BodyToken, Times, Unit, Dash, RowNumber, Colon, LParen, RParen,
+  BodyToken, Times, Units, Dash, RowNumber, Colon, LParen, RParen,
 ];

@@ -1,0 +1,74 @@
+/**
+ * Parse throughput: lex + parse + CST-to-AST (and the text checks) of a
+ * generated 1 MB pattern, against JSON.parse of a JSON file of the same size
+ * holding the same rows, measured in the same run. Goal: at most 15x.
+ */
+import { parse } from '../parser/index.js';
+import { medianMs, type Bench } from './harness.js';
+
+const KEYS = 'ABCDEFGH';
+const TARGET = 1_000_000;
+
+/** A deterministic flat panel of 40 units a row, with groups, notes and comments, about `TARGET` bytes. */
+export function generatePattern(target = TARGET): { text: string; rows: { row: number; units: string[]; note: string }[] } {
+  let seed = 7;
+  const next = (n: number): number => {
+    seed = (seed * 1103515245 + 12345) & 0x7fffffff;
+    return seed % n;
+  };
+  const key = (): string => KEYS[next(KEYS.length)]!;
+  const head = [
+    'title: Bench Panel',
+    'designer: Oren Vale',
+    'layout: flat',
+    'colors:',
+    ...[...KEYS].map((k, i) => `  ${k}  #${(0x102030 + i * 0x1f2b3c).toString(16).slice(-6)}  shade ${i + 1}`),
+  ].join('\n');
+  const parts = [head];
+  const rows: { row: number; units: string[]; note: string }[] = [];
+  let size = head.length;
+  for (let r = 1; size < target; r++) {
+    const units: string[] = [];
+    for (let u = 0; u < 40; u++) units.push(Array.from({ length: r === 1 ? (u === 0 ? 4 : 3) : u === 0 ? 3 : 2 }, key).join(''));
+    const note = `work row ${r} with an even tension, ${next(1000)} beads in`;
+    const body = `${units.slice(0, 30).join(' ')} (${units.slice(30, 35).join(' ')})x1 ${units.slice(35).join(' ')}`;
+    const line = `row ${r}: ${body}  # checkpoint ${r}\nnote: ${note}`;
+    parts.push(line);
+    rows.push({ row: r, units, note });
+    size += line.length + 1;
+  }
+  return { text: parts.join('\n') + '\n', rows };
+}
+
+/** The same rows as JSON, as many as fit in the pattern's size, padded with spaces to exactly that size. */
+function sameSizeJson(text: string, rows: unknown[]): string {
+  let json = '[]';
+  for (let n = rows.length; n > 0; n = Math.floor(n * 0.98)) {
+    json = JSON.stringify({ title: 'Bench Panel', rows: rows.slice(0, n) });
+    if (json.length <= text.length) break;
+  }
+  return json + ' '.repeat(Math.max(0, text.length - json.length));
+}
+
+const bench: Bench = {
+  name: 'parser',
+  async run() {
+    const { text, rows } = generatePattern();
+    const json = sameSizeJson(text, rows);
+    const check = parse(text);
+    if (check.diagnostics.some((d) => d.severity === 'error')) throw new Error(`bench pattern has errors: ${check.diagnostics[0]!.message}`);
+    const baseline = await medianMs(() => JSON.parse(json), 9, 3);
+    const measured = await medianMs(() => parse(text), 9, 3);
+    return [
+      {
+        name: `parse a ${(text.length / 1e6).toFixed(2)} MB pattern vs JSON.parse of ${(json.length / 1e6).toFixed(2)} MB`,
+        value: measured,
+        baseline,
+        unit: 'ms',
+        goal: { atMost: 15 },
+      },
+    ];
+  },
+};
+
+export default bench;
