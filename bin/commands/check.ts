@@ -9,6 +9,9 @@ import { fileStart, hasErrors, sortDiagnostics, type Diagnostic } from '../../sh
 import { EXIT_FAILURE, EXIT_OK, EXIT_PATTERN_ERRORS, type CliIO, type ParsedCommand } from '../command.js';
 import { displayName, printDiagnostics, readPattern } from '../read-input.js';
 
+/** The id a file that could not be read gets in the JSON report. */
+const READ_ERROR = 'read-error';
+
 export interface CheckedFile {
   file: string;
   ok: boolean;
@@ -51,7 +54,7 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
     if ('error' in input) {
       io.stderr.write(`${input.error}\n`);
       exit = EXIT_FAILURE;
-      const diagnostic: Diagnostic = { severity: 'error', id: 'read-error', message: input.error, range: fileStart };
+      const diagnostic: Diagnostic = { severity: 'error', id: READ_ERROR, message: input.error, range: fileStart };
       files.push({ file: displayName(path), ok: false, diagnostics: [diagnostic] });
       continue;
     }
@@ -72,9 +75,11 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
 const plural = (n: number, word: string): string => `${n} ${word}${n === 1 ? '' : 's'}`;
 
 function summary(files: readonly CheckedFile[]): string {
-  const all = files.flatMap((f) => f.diagnostics);
+  const unreadable = files.filter((f) => f.diagnostics.some((d) => d.id === READ_ERROR)).length;
+  const all = files.flatMap((f) => f.diagnostics).filter((d) => d.id !== READ_ERROR);
   const errors = all.filter((d) => d.severity === 'error').length;
   const warnings = all.filter((d) => d.severity === 'warning').length;
   const found = errors + warnings === 0 ? 'no problems' : `${plural(errors, 'error')}, ${plural(warnings, 'warning')}`;
-  return `checked ${plural(files.length, 'file')}: ${found}\n`;
+  const missed = unreadable > 0 ? `; ${unreadable} could not be read` : '';
+  return `checked ${plural(files.length - unreadable, 'file')}: ${found}${missed}\n`;
 }

@@ -120,7 +120,9 @@ describe('fourfold check', () => {
   it('a missing file or a folder is exit 2 with one clear line', async () => {
     const missing = await check(['nope.ffp']);
     expect(missing.code).toBe(2);
-    expect(missing.err).toContain("fourfold: cannot read 'nope.ffp': no such file or folder\n");
+    expect(missing.err).toBe(
+      "fourfold: cannot read 'nope.ffp': no such file or folder\nchecked 0 files: no problems; 1 could not be read\n",
+    );
     const folder = await check(['.']);
     expect(folder.code).toBe(2);
     expect(folder.err).toContain("fourfold: cannot read '.': it is a folder, not a file\n");

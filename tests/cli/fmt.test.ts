@@ -1,4 +1,4 @@
-import { cpSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { chmodSync, cpSync, statSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -54,6 +54,14 @@ describe('fourfold fmt', () => {
     expect(read('messy.ffp')).toBe(expected);
     expect(readdirSync(dir).filter((f) => f.endsWith('.tmp'))).toEqual([]);
     expect((await fmt(['--check', 'messy.ffp'])).code).toBe(0);
+  });
+
+  it('--write keeps the file mode, and with - prints to standard output', async () => {
+    chmodSync(join(dir, 'messy.ffp'), 0o600);
+    await fmt(['--write', 'messy.ffp']);
+    expect(statSync(join(dir, 'messy.ffp')).mode & 0o777).toBe(0o600);
+    const r = await fmt(['--write', '-'], read('messy.ffp'));
+    expect(r).toEqual({ code: 0, out: read('messy.ffp'), err: '' });
   });
 
   it('--write never touches a file with syntax errors: it reports them and exits 1', async () => {
