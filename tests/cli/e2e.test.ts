@@ -16,8 +16,10 @@ const fourfold = (args: string[], input?: string) =>
   execa('node', [launcher, ...args], { cwd: fixtures, input, reject: false });
 
 beforeAll(async () => {
-  // tsc emits even when a file elsewhere has type errors; what matters here is that the CLI is there.
-  await execa('npm', ['run', 'build:cli'], { cwd: root, reject: false });
+  // `npm test` has just built everything (pretest); a direct vitest run builds here.
+  // tsc emits even when a file elsewhere has type errors; what matters is that the CLI is there.
+  if (process.env.npm_lifecycle_event !== 'test')
+    await execa('npm', ['run', 'build:cli'], { cwd: root, reject: false });
   expect(existsSync(`${root}dist/bin/main.js`)).toBe(true);
 }, 180_000);
 
