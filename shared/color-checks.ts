@@ -81,7 +81,10 @@ export function flatCircle(model: Model, ast: PatternAst): Diagnostic[] {
     const shape = ratio < CUP_BELOW ? 'cup' : ratio > RUFFLE_ABOVE ? 'ruffle' : null;
     const range = roundRange(ast, row.row);
     if (shape === null || range === null) continue;
-    const limit = shape === 'cup' ? `fewer than ${oneDecimal(CUP_BELOW * expected)}` : `more than ${oneDecimal(RUFFLE_ABOVE * expected)}`;
+    const limit =
+      shape === 'cup'
+        ? `fewer than ${oneDecimal(CUP_BELOW * expected)}`
+        : `more than ${oneDecimal(RUFFLE_ABOVE * expected)}`;
     out.push({
       severity: 'warning',
       id: 'flat-circle',
@@ -99,7 +102,10 @@ export function flatCircle(model: Model, ast: PatternAst): Diagnostic[] {
 }
 
 /** The checks `fourfold check` and the server run on top of the engine's own. */
-export function materialChecks(compiled: { ast: PatternAst; model: Model }, options: MaterialCheckOptions = {}): Diagnostic[] {
+export function materialChecks(
+  compiled: { ast: PatternAst; model: Model },
+  options: MaterialCheckOptions = {},
+): Diagnostic[] {
   return [
     ...similarColors(compiled.ast, options.similarColors ?? DEFAULT_SIMILAR_COLORS),
     ...flatCircle(compiled.model, compiled.ast),

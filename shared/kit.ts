@@ -20,10 +20,16 @@ export interface KitOptions {
  * passes through some beads many times may want the finer choice.
  */
 const TOOLS: Record<string, { needle: string; thread: string }> = {
-  '15/0': { needle: 'size 12 or 13 beading needle', thread: 'fine nylon beading thread (size 00 or A) or 4 lb braided line' },
+  '15/0': {
+    needle: 'size 12 or 13 beading needle',
+    thread: 'fine nylon beading thread (size 00 or A) or 4 lb braided line',
+  },
   '11/0': { needle: 'size 10 or 12 beading needle', thread: 'nylon beading thread size B or D, or 6 lb braided line' },
   '8/0': { needle: 'size 10 beading needle', thread: 'nylon beading thread size D, or 6 to 8 lb braided line' },
-  '6/0': { needle: 'size 10 beading needle or a big-eye needle', thread: 'nylon beading thread size D or F, or 8 to 10 lb braided line' },
+  '6/0': {
+    needle: 'size 10 beading needle or a big-eye needle',
+    thread: 'nylon beading thread size D or F, or 8 to 10 lb braided line',
+  },
 };
 
 export function toolSuggestion(size: string): { needle: string; thread: string } | null {
@@ -61,21 +67,27 @@ function kitContent(model: Model, t: Tally, o: KitOptions): KitContent {
       `Buy amounts include a ${spare}% spare for misshapen beads${o.packGrams ? `, in whole packs of ${o.packGrams} g` : ''}.`,
     ],
     // A colour the pattern never uses is a palette slip (the engine warns); nothing to buy.
-    colors: t.colors.filter((c) => c.count > 0).map((c) => ({
-      key: c.key,
-      name: c.name,
-      hex: c.hex,
-      count: String(c.count),
-      grams: `${c.grams.low}-${c.grams.high} g`,
-      buy: buyWords(c.buyGrams, o.packGrams),
-    })),
+    colors: t.colors
+      .filter((c) => c.count > 0)
+      .map((c) => ({
+        key: c.key,
+        name: c.name,
+        hex: c.hex,
+        count: String(c.count),
+        grams: `${c.grams.low}-${c.grams.high} g`,
+        buy: buyWords(c.buyGrams, o.packGrams),
+      })),
     thread: [
       `${cm(t.thread.mm)} of thread in all, as ${t.thread.threads} thread${t.thread.threads === 1 ? '' : 's'} ` +
         `of ${cm(o.workingLengthMm)}, each with a ${cm(o.tailMm)} tail at the start and at the end.`,
       ...(model.header.thread ? [`The designer suggests: ${model.header.thread}.`] : []),
     ],
     tools: tools
-      ? [`Needle: ${tools.needle}.`, `Thread: ${tools.thread}.`, 'These are common choices for this bead size, not a rule.']
+      ? [
+          `Needle: ${tools.needle}.`,
+          `Thread: ${tools.thread}.`,
+          'These are common choices for this bead size, not a rule.',
+        ]
       : [`No needle or thread suggestion is known for ${size} beads.`],
     caution: SMALL_PARTS_CAUTION,
   };
@@ -85,7 +97,8 @@ export function renderKitMarkdown(model: Model, t: Tally, o: KitOptions): string
   const k = kitContent(model, t, o);
   const out = [`# ${mdCell(k.title)}`, '', ...k.about.map((l) => `- ${mdCell(l)}`), '', '## Beads', ''];
   out.push('| key | colour | name | count | weight | buy |', '|---|---|---|---:|---:|---:|');
-  for (const c of k.colors) out.push(`| ${c.key} | ${c.hex} | ${mdCell(c.name)} | ${c.count} | ${c.grams} | ${c.buy} |`);
+  for (const c of k.colors)
+    out.push(`| ${c.key} | ${c.hex} | ${mdCell(c.name)} | ${c.count} | ${c.grams} | ${c.buy} |`);
   out.push('', '## Thread', '', ...k.thread.map(mdCell), '', '## Needle and thread size', '', ...k.tools.map(mdCell));
   out.push('', '## Caution', '', `**${mdCell(k.caution)}**`, '');
   return out.join('\n');

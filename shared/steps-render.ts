@@ -18,7 +18,8 @@ function pickupPhrase(beads: readonly BeadRef[]): string {
   return runs.map((r) => (r.n > 1 ? `${label(r.bead)} x${r.n}` : label(r.bead))).join(', ');
 }
 
-const passPhrase = (beads: readonly BeadRef[]): string => beads.map((b) => `the ${b.where} (${label(b)})`).join(', then ');
+const passPhrase = (beads: readonly BeadRef[]): string =>
+  beads.map((b) => `the ${b.where} (${label(b)})`).join(', then ');
 
 const plural = (n: number, one: string, many = `${one}s`): string => `${n} ${n === 1 ? one : many}`;
 
@@ -48,7 +49,9 @@ export function rowHeading(row: StepRow): string {
 }
 
 function byline(doc: StepsDoc): string {
-  return [doc.designer ? `by ${doc.designer}` : '', `${doc.beads} beads`, `${doc.layout} layout`].filter(Boolean).join(' - ');
+  return [doc.designer ? `by ${doc.designer}` : '', `${doc.beads} beads`, `${doc.layout} layout`]
+    .filter(Boolean)
+    .join(' - ');
 }
 
 const colorLine = (c: StepsDoc['colors'][number]): string => `${label(c)} (${c.hex})`;
@@ -132,7 +135,9 @@ export function renderStepsHtml(doc: StepsDoc): string {
     body.push(`<section id="row-${row.row}">`, `<h2>${e(rowHeading(row))}</h2>`);
     body.push(...row.notes.map((n) => `<p class="note">${e(n)}</p>`), '<ol>');
     for (const step of row.steps) {
-      const items = unitSentences(step, row.word).map((s) => `<li>${e(s)}</li>`).join('');
+      const items = unitSentences(step, row.word)
+        .map((s) => `<li>${e(s)}</li>`)
+        .join('');
       body.push(`<li value="${step.number}"><strong>${e(unitHeading(step))}</strong><ul>${items}</ul></li>`);
     }
     body.push('</ol>', '</section>');

@@ -171,7 +171,10 @@ function buildRow(ctx: Ctx, row: RowInfo, stepOf: Map<number, UnitStep>): StepRo
     word: row.word,
     units: row.units.length,
     // Counted from the pick-ups printed, so the header always matches the lines below it.
-    beads: steps.reduce((n, s) => n + s.round.filter((m) => m.kind === 'pickup').reduce((k, m) => k + m.beads.length, 0), 0),
+    beads: steps.reduce(
+      (n, s) => n + s.round.filter((m) => m.kind === 'pickup').reduce((k, m) => k + m.beads.length, 0),
+      0,
+    ),
     direction: directionWords(row.heading, row.word, row.row === 1),
     notes: row.notes,
     steps,

@@ -60,7 +60,8 @@ function optionProblem(message: string): Diagnostic {
 function checkOptions(o: Required<Omit<TallyOptions, 'packGrams'>> & Pick<TallyOptions, 'packGrams'>): Diagnostic[] {
   const out: Diagnostic[] = [];
   if (!(o.spare >= 0)) out.push(optionProblem(`the spare margin must be 0% or more, not ${o.spare * 100}%.`));
-  if (o.packGrams !== undefined && !(o.packGrams > 0)) out.push(optionProblem(`a pack must hold more than 0 g, not ${o.packGrams} g.`));
+  if (o.packGrams !== undefined && !(o.packGrams > 0))
+    out.push(optionProblem(`a pack must hold more than 0 g, not ${o.packGrams} g.`));
   if (!(o.tailMm >= 0)) out.push(optionProblem(`the tail must be 0 mm or more, not ${o.tailMm} mm.`));
   if (!(o.workingLengthMm > 2 * o.tailMm))
     out.push(
@@ -70,7 +71,11 @@ function checkOptions(o: Required<Omit<TallyOptions, 'packGrams'>> & Pick<TallyO
       ),
     );
   if (!(o.beadsPerGram.low > 0 && o.beadsPerGram.low <= o.beadsPerGram.high))
-    out.push(optionProblem(`beads per gram must be a range with 0 < low <= high, not ${o.beadsPerGram.low}-${o.beadsPerGram.high}.`));
+    out.push(
+      optionProblem(
+        `beads per gram must be a range with 0 < low <= high, not ${o.beadsPerGram.low}-${o.beadsPerGram.high}.`,
+      ),
+    );
   return out;
 }
 
@@ -128,7 +133,14 @@ export function tally(model: Model, options: TallyOptions): Result<Tally> {
     const count = perColor.get(p.key) ?? 0;
     // Fewer beads per gram means heavier beads, so the low bpg gives the high weight.
     const grams = { low: round2(count / bpgHigh), high: round2(count / bpgLow) };
-    return { key: p.key, name: p.name, hex: p.hex, count, grams, buyGrams: buyAmount(grams.high, o.spare, o.packGrams) };
+    return {
+      key: p.key,
+      name: p.name,
+      hex: p.hex,
+      count,
+      grams,
+      buyGrams: buyAmount(grams.high, o.spare, o.packGrams),
+    };
   });
 
   const path = pathLengthMm(model);

@@ -15,18 +15,23 @@ const PUBLISHED: Record<string, { low: number; high: number; typical: number }> 
 };
 
 describe('beads-per-gram table', () => {
-  it.each(BEAD_SIZES.map((b) => [`${b.size} ${b.shape}`, b] as const))('%s lies within the published spread', (name, b) => {
-    const spread = PUBLISHED[name];
-    expect(spread, `no published figure for ${name}`).toBeDefined();
-    expect(b.perGram.low).toBeLessThanOrEqual(b.perGram.high);
-    expect(b.perGram.low).toBeGreaterThanOrEqual(spread!.low);
-    expect(b.perGram.high).toBeLessThanOrEqual(spread!.high);
-    expect(b.perGram.low).toBeLessThanOrEqual(spread!.typical);
-    expect(b.perGram.high).toBeGreaterThanOrEqual(spread!.typical);
-  });
+  it.each(BEAD_SIZES.map((b) => [`${b.size} ${b.shape}`, b] as const))(
+    '%s lies within the published spread',
+    (name, b) => {
+      const spread = PUBLISHED[name];
+      expect(spread, `no published figure for ${name}`).toBeDefined();
+      expect(b.perGram.low).toBeLessThanOrEqual(b.perGram.high);
+      expect(b.perGram.low).toBeGreaterThanOrEqual(spread!.low);
+      expect(b.perGram.high).toBeLessThanOrEqual(spread!.high);
+      expect(b.perGram.low).toBeLessThanOrEqual(spread!.typical);
+      expect(b.perGram.high).toBeGreaterThanOrEqual(spread!.typical);
+    },
+  );
 
   it('gets lighter per bead as the size number grows (more beads per gram)', () => {
-    const rounds = ['6/0', '8/0', '11/0', '15/0'].map((s) => BEAD_SIZES.find((b) => b.size === s && b.shape === 'round')!);
+    const rounds = ['6/0', '8/0', '11/0', '15/0'].map((s) =>
+      BEAD_SIZES.find((b) => b.size === s && b.shape === 'round')!,
+    );
     for (let i = 1; i < rounds.length; i++) expect(rounds[i]!.perGram.low).toBeGreaterThan(rounds[i - 1]!.perGram.high);
   });
 });

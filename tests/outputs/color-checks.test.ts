@@ -15,11 +15,28 @@ const at = (line: number, column = 1, width = 1): SourceRange => ({
 });
 
 function color(key: string, hex: string, line: number): ColorDef {
-  return { key, written: hex, hex, name: '', range: at(line, 3, 10), keyRange: at(line, 3), colorRange: at(line, 6, 7) };
+  return {
+    key,
+    written: hex,
+    hex,
+    name: '',
+    range: at(line, 3, 10),
+    keyRange: at(line, 3),
+    colorRange: at(line, 6, 7),
+  };
 }
 
 function row(n: number, line: number): RowNode {
-  return { word: 'round', from: n, to: n, items: [], notes: [], range: at(line, 1, 20), numberRange: at(line, 7, 1), leadingComments: [] };
+  return {
+    word: 'round',
+    from: n,
+    to: n,
+    items: [],
+    notes: [],
+    range: at(line, 1, 20),
+    numberRange: at(line, 7, 1),
+    leadingComments: [],
+  };
 }
 
 function ast(colors: ColorDef[], rows: RowNode[] = []): PatternAst {
@@ -111,8 +128,15 @@ describe('flat-circle check for rounds', () => {
   });
 
   it('is run with similar-colors by materialChecks', () => {
-    const compiled = { ast: ast([color('A', '#2e6f8e', 4), color('B', '#2e6f8f', 5)], [row(1, 10), row(2, 11)]), model: roundModel([6, 7]) };
-    expect(materialChecks(compiled).map((d) => d.id).sort()).toEqual(['flat-circle', 'similar-colors']);
+    const compiled = {
+      ast: ast([color('A', '#2e6f8e', 4), color('B', '#2e6f8f', 5)], [row(1, 10), row(2, 11)]),
+      model: roundModel([6, 7]),
+    };
+    expect(
+      materialChecks(compiled)
+        .map((d) => d.id)
+        .sort(),
+    ).toEqual(['flat-circle', 'similar-colors']);
     expect(materialChecks(compiled, { similarColors: 0.01 }).map((d) => d.id)).toEqual(['flat-circle']);
   });
 });

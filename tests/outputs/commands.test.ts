@@ -41,7 +41,24 @@ describe('fourfold tally', () => {
 
   it('applies --spare, --pack, --working-length and --tail', async () => {
     const base = JSON.parse((await run(tallyCmd, ['tally', '-', '--format', 'json'])).out);
-    const t = JSON.parse((await run(tallyCmd, ['tally', '-', '--format', 'json', '--spare', '50%', '--pack', '5', '--working-length', '40cm', '--tail', '15cm'])).out);
+    const t = JSON.parse(
+      (
+        await run(tallyCmd, [
+          'tally',
+          '-',
+          '--format',
+          'json',
+          '--spare',
+          '50%',
+          '--pack',
+          '5',
+          '--working-length',
+          '40cm',
+          '--tail',
+          '15cm',
+        ])
+      ).out,
+    );
     expect(t.spare).toBe(0.5);
     for (const c of t.colors) expect(c.buyGrams % 5).toBe(0);
     // 10 cm of beading thread per 40 cm piece: more threads than with 150 cm.
@@ -61,7 +78,11 @@ describe('fourfold tally', () => {
   });
 
   it('prints the errors and nothing else for a broken pattern (exit 1)', async () => {
-    const { code, out, err } = await run(tallyCmd, ['tally', '-'], PATTERN.replace('BA +AAA\nrow 3', 'BAA +AAA\nrow 3'));
+    const { code, out, err } = await run(
+      tallyCmd,
+      ['tally', '-'],
+      PATTERN.replace('BA +AAA\nrow 3', 'BAA +AAA\nrow 3'),
+    );
     expect(code).toBe(1);
     expect(out).toBe('');
     expect(err).toContain('bead-count');

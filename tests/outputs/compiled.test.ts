@@ -15,10 +15,16 @@ import { renderStepsHtml, renderStepsText } from '../../shared/steps-render.js';
 import { pathLengthMm, tally } from '../../shared/tally.js';
 
 const GOLDEN = join('tests', 'outputs', 'golden');
+const OWN = join('tests', 'outputs', 'patterns');
 const patternsIn = (dir: string): string[] =>
-  existsSync(dir) ? readdirSync(dir).filter((f) => f.endsWith('.ffp')).sort().map((f) => join(dir, f)) : [];
+  existsSync(dir)
+    ? readdirSync(dir)
+        .filter((f) => f.endsWith('.ffp'))
+        .sort()
+        .map((f) => join(dir, f))
+    : [];
 /** The project's examples, and invented patterns of our own so every layout has a golden file. */
-const examples = [...patternsIn('examples'), ...patternsIn(join('tests', 'outputs', 'patterns'))];
+const examples = [...patternsIn('examples'), ...patternsIn(OWN)];
 const kitOptions = { workingLengthMm: 1500, tailMm: 150 };
 
 function compiled(text: string) {
@@ -27,7 +33,8 @@ function compiled(text: string) {
   return result.value;
 }
 
-const header = (layout = 'flat') => `title: Test piece\nlayout: ${layout}\ncolors:\n  A #f4f1ea chalk\n  B #2e6f8e deep teal\n`;
+const header = (layout = 'flat') =>
+  `title: Test piece\nlayout: ${layout}\ncolors:\n  A #f4f1ea chalk\n  B #2e6f8e deep teal\n`;
 
 describe('outputs on closed forms', () => {
   it('counts a strip of n units as 3n + 1 beads, and its thread grows with it', () => {
@@ -112,10 +119,12 @@ describe.each(examples)('example %s', (file) => {
   });
 
   it('matches its golden steps text', () => {
-    const golden = join(GOLDEN, `${basename(file, '.ffp')}.steps.txt`);
+    // Examples keep their golden files in golden/; our own patterns keep theirs beside them.
+    const dir = file.startsWith(OWN) ? OWN : GOLDEN;
+    const golden = join(dir, `${basename(file, '.ffp')}.steps.txt`);
     const out = renderStepsText(buildSteps(model));
     if (process.env.UPDATE_GOLDEN === '1' || !existsSync(golden)) {
-      mkdirSync(GOLDEN, { recursive: true });
+      mkdirSync(dir, { recursive: true });
       writeFileSync(golden, out);
     }
     expect(out).toBe(readFileSync(golden, 'utf8'));

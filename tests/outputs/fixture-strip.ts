@@ -11,7 +11,16 @@ import type { Bead, Model, Place, ThreadPass } from '../../shared/model.js';
 
 const src = { line: 11, column: 8, endLine: 11, endColumn: 12 };
 
-function bead(id: number, color: string, units: number[], places: Place[], j: [number, number], x: number, y: number, angle: number): Bead {
+function bead(
+  id: number,
+  color: string,
+  units: number[],
+  places: Place[],
+  j: [number, number],
+  x: number,
+  y: number,
+  angle: number,
+): Bead {
   return { id, color, units, places, junctions: j, x, y, angle, length: 0.8 };
 }
 
@@ -25,7 +34,13 @@ export function stripModel(): Model {
     bead(5, 'C', [1], ['far'], [5, 4], 2, 0.5, 90),
     bead(6, 'A', [1], ['base'], [4, 1], 1.5, 0, 0),
   ];
-  const pass = (b: number, unit: number, kind: ThreadPass['kind'], from: number, to: number): ThreadPass => ({ bead: b, unit, kind, from, to });
+  const pass = (b: number, unit: number, kind: ThreadPass['kind'], from: number, to: number): ThreadPass => ({
+    bead: b,
+    unit,
+    kind,
+    from,
+    to,
+  });
   const thread: ThreadPass[] = [
     pass(0, 0, 'pickup', 1, 2),
     pass(1, 0, 'pickup', 2, 3),
@@ -39,7 +54,14 @@ export function stripModel(): Model {
   ];
   return {
     schema: 'fourfold.model/1',
-    header: { title: 'Two <Units> & Co', designer: 'Ines Marlow', beads: { size: '11/0', shape: 'round' }, layout: 'flat', order: 'pickup', notes: ['Keep the tension firm.'] },
+    header: {
+      title: 'Two <Units> & Co',
+      designer: 'Ines Marlow',
+      beads: { size: '11/0', shape: 'round' },
+      layout: 'flat',
+      order: 'pickup',
+      notes: ['Keep the tension firm.'],
+    },
     palette: [
       { key: 'A', hex: '#f4f1ea', name: 'chalk' },
       { key: 'B', hex: '#2e6f8e', name: 'deep teal' },
@@ -57,8 +79,32 @@ export function stripModel(): Model {
     },
     rows: [{ row: 1, word: 'row', units: [0, 1], beads: 7, heading: 'right', notes: ['Leave a long tail.'], line: 11 }],
     units: [
-      { id: 0, row: 1, index: 1, mark: '', places: { base: 3, far: 0, top: 1, near: 2 }, x: 0.5, y: 0.5, angle: 0, direction: 'forward', startCorner: 'base|far', source: src },
-      { id: 1, row: 1, index: 2, mark: '', places: { base: 6, far: 5, top: 4, near: 0 }, x: 1.5, y: 0.5, angle: 0, direction: 'backward', startCorner: 'top|near', source: { ...src, column: 13, endColumn: 16 } },
+      {
+        id: 0,
+        row: 1,
+        index: 1,
+        mark: '',
+        places: { base: 3, far: 0, top: 1, near: 2 },
+        x: 0.5,
+        y: 0.5,
+        angle: 0,
+        direction: 'forward',
+        startCorner: 'base|far',
+        source: src,
+      },
+      {
+        id: 1,
+        row: 1,
+        index: 2,
+        mark: '',
+        places: { base: 6, far: 5, top: 4, near: 0 },
+        x: 1.5,
+        y: 0.5,
+        angle: 0,
+        direction: 'backward',
+        startCorner: 'top|near',
+        source: { ...src, column: 13, endColumn: 16 },
+      },
     ],
     beads,
     junctions: [
@@ -72,7 +118,11 @@ export function stripModel(): Model {
     thread,
     steps: [
       {
-        unit: 0, direction: 'forward', startCorner: 'base|far', firstPlace: 'far', cue: true,
+        unit: 0,
+        direction: 'forward',
+        startCorner: 'base|far',
+        firstPlace: 'far',
+        cue: true,
         actions: [
           { kind: 'pickup', bead: 0, place: 'far' },
           { kind: 'pickup', bead: 1, place: 'top' },
@@ -83,7 +133,11 @@ export function stripModel(): Model {
         moveOn: [],
       },
       {
-        unit: 1, direction: 'backward', startCorner: 'top|near', firstPlace: 'top', cue: true,
+        unit: 1,
+        direction: 'backward',
+        startCorner: 'top|near',
+        firstPlace: 'top',
+        cue: true,
         actions: [
           { kind: 'pickup', bead: 4, place: 'top' },
           { kind: 'pickup', bead: 5, place: 'far' },

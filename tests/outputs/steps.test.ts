@@ -51,7 +51,9 @@ describe('steps document on a hand-built strip', () => {
     m.steps[0]!.moveOn = [1, 0];
     const moveOn = buildSteps(m).rows[0]!.steps[0]!.moveOn;
     expect(moveOn.map((b) => b.where)).toEqual(['top', 'right side']);
-    expect(renderStepsText(buildSteps(m))).toContain('To move on, pass through the top (B deep teal), then the right side (A chalk).');
+    expect(renderStepsText(buildSteps(m))).toContain(
+      'To move on, pass through the top (B deep teal), then the right side (A chalk).',
+    );
   });
 
   it('renders HTML that is well-formed XML, with every text escaped', () => {

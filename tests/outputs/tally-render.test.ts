@@ -13,22 +13,40 @@ function parseCsv(text: string): string[][] {
   let field = '';
   let record: string[] = [];
   let quoted = false;
+  const endField = () => {
+    record.push(field);
+    field = '';
+  };
   for (let i = 0; i < text.length; i++) {
     const ch = text[i]!;
-    if (quoted) {
-      if (ch === '"' && text[i + 1] === '"') (field += '"'), i++;
-      else if (ch === '"') quoted = false;
-      else field += ch;
-    } else if (ch === '"') quoted = true;
-    else if (ch === ',') record.push(field), (field = '');
-    else if (ch === '\r' && text[i + 1] === '\n') record.push(field), records.push(record), (record = []), (field = ''), i++;
-    else field += ch;
+    if (quoted && ch === '"' && text[i + 1] === '"') {
+      field += '"';
+      i++;
+    } else if (ch === '"') {
+      quoted = !quoted;
+    } else if (!quoted && ch === ',') {
+      endField();
+    } else if (!quoted && ch === '\r' && text[i + 1] === '\n') {
+      endField();
+      records.push(record);
+      record = [];
+      i++;
+    } else {
+      field += ch;
+    }
   }
-  if (field !== '' || record.length) record.push(field), records.push(record);
+  if (field !== '' || record.length) {
+    endField();
+    records.push(record);
+  }
   return records;
 }
 
-const options = materialOptions({ name: 'tally', operands: ['x'], options: { spare: 0.1, workingLengthMm: 1500, tailMm: 150 } });
+const options = materialOptions({
+  name: 'tally',
+  operands: ['x'],
+  options: { spare: 0.1, workingLengthMm: 1500, tailMm: 150 },
+});
 
 describe('tally CSV', () => {
   const model = stripModel();
@@ -41,9 +59,9 @@ describe('tally CSV', () => {
     expect(rows.every((r) => r.length === CSV_HEADER.length)).toBe(true);
     const col = (name: string) => CSV_HEADER.indexOf(name);
     const colours = rows.filter((r) => r[0] === 'color');
-    expect(colours.map((r) => [r[col('key')], r[col('name')], Number(r[col('beads')]), Number(r[col('buy_grams')])])).toEqual(
-      t.colors.map((c) => [c.key, c.name, c.count, c.buyGrams]),
-    );
+    expect(
+      colours.map((r) => [r[col('key')], r[col('name')], Number(r[col('beads')]), Number(r[col('buy_grams')])]),
+    ).toEqual(t.colors.map((c) => [c.key, c.name, c.count, c.buyGrams]));
     const perRow = rows.filter((r) => r[0] === 'row').map((r) => Number(r[col('beads')]));
     const total = rows.find((r) => r[0] === 'total')!;
     expect(perRow.reduce((a, b) => a + b, 0)).toBe(Number(total[col('beads')]));
@@ -69,7 +87,11 @@ describe('tally table', () => {
   });
 
   it('reads the options args.ts hands over, with the design defaults', () => {
-    expect(materialOptions({ name: 'kit', operands: [], options: {} })).toEqual({ spare: 0.1, workingLengthMm: 1500, tailMm: 150 });
+    expect(materialOptions({ name: 'kit', operands: [], options: {} })).toEqual({
+      spare: 0.1,
+      workingLengthMm: 1500,
+      tailMm: 150,
+    });
     expect(materialOptions({ name: 'kit', operands: [], options: { pack: 5 } }).packGrams).toBe(5);
   });
 });

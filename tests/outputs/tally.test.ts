@@ -16,7 +16,13 @@ describe('tally on a hand-built strip', () => {
     expect(t.beads).toBe(3 * 2 + 1);
     expect(t.units).toBe(2);
     expect(t.rows).toEqual([{ row: 1, units: 2, beads: 7 }]);
-    expect(t.colors.map((c) => [c.key, c.count])).toEqual([['A', 2], ['B', 2], ['C', 2], ['D', 1], ['E', 0]]);
+    expect(t.colors.map((c) => [c.key, c.count])).toEqual([
+      ['A', 2],
+      ['B', 2],
+      ['C', 2],
+      ['D', 1],
+      ['E', 0],
+    ]);
   });
 
   it('gives grams as a low-high range and buys the high estimate plus the spare', () => {
