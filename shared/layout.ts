@@ -61,29 +61,22 @@ function gridLayout(w: Weave, g: Geometry): void {
     g.ux[id] = (nearX + farX) / 2;
     g.uy[id] = y0 + 0.5;
     if (u.failed) return;
-    const cornerXY: Array<[number, number]> = [
-      [farX, y0],
-      [farX, y0 + 1],
-      [nearX, y0 + 1],
-      [nearX, y0],
-    ];
     for (let k = 0; k < 4; k++) {
       const j = u.corners[k]!;
       if (Number.isNaN(g.jx[j]!)) {
-        g.jx[j] = wrap(cornerXY[k]![0]);
-        g.jy[j] = cornerXY[k]![1];
+        // Corners 0 and 1 lie on the far side, 1 and 2 on the top.
+        g.jx[j] = wrap(k < 2 ? farX : nearX);
+        g.jy[j] = k === 1 || k === 2 ? y0 + 1 : y0;
       }
     }
-    const sides: Array<[number, number, number]> = [
-      [(nearX + farX) / 2, y0, 0],
-      [farX, y0 + 0.5, 90],
-      [(nearX + farX) / 2, y0 + 1, 0],
-      [nearX, y0 + 0.5, 90],
-    ];
     for (let p = 0; p < 4; p++) {
       const b = u.beads[p]!;
       if (w.beadOwner[b] !== id) continue;
-      [g.bx[b], g.by[b], g.bAngle[b]] = sides[p]!;
+      // Places 0 and 2 (base, top) run along x; 1 and 3 (far, near) up the sides.
+      const across = p % 2 === 0;
+      g.bx[b] = across ? (nearX + farX) / 2 : p === 1 ? farX : nearX;
+      g.by[b] = p === 0 ? y0 : p === 2 ? y0 + 1 : y0 + 0.5;
+      g.bAngle[b] = across ? 0 : 90;
     }
   });
   if (circumference) g.info.seamX = 0;

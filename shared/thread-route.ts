@@ -12,7 +12,16 @@ export interface Net {
   at: Int32Array;
   ends: readonly number[];
   rank: readonly number[];
+  /** Search scratch: the search number that last saw each (bead, end) state, so no search clears it. */
+  seen: Int32Array;
+  search: number;
 }
+
+// Scratch state lists shared by every search (searches never overlap), so a search allocates only its result.
+const stJ: number[] = [];
+const stBead: number[] = [];
+const stParent: number[] = [];
+const options: number[] = [];
 
 /** True when route `a` is preferred to route `b`: shorter, or at the first differing bead the later-added one. */
 export function preferRoute(rank: readonly number[], a: readonly number[], b: readonly number[]): boolean {
@@ -24,41 +33,49 @@ export function preferRoute(rank: readonly number[], a: readonly number[], b: re
 /** The preferred route from junction `from` (having just left bead `last`, -1 for none) to `target`, or null past `limit` beads. */
 export function findRoute(net: Net, from: number, last: number, target: number, limit: number): number[] | null {
   if (from === target) return [];
-  const stJ: number[] = [from];
-  const stBead: number[] = [last];
-  const stParent: number[] = [-1];
-  const seen = new Set<number>();
-  let layer = [0];
-  const options: number[] = [];
-  for (let depth = 1; depth <= limit && layer.length > 0; depth++) {
-    const next: number[] = [];
-    for (const s of layer) {
+  const search = ++net.search;
+  stJ.length = stBead.length = stParent.length = 0;
+  stJ.push(from);
+  stBead.push(last);
+  stParent.push(-1);
+  let begin = 0;
+  for (let depth = 1; depth <= limit && begin < stJ.length; depth++) {
+    const end = stJ.length;
+    for (let s = begin; s < end; s++) {
       const j = stJ[s]!;
       options.length = 0;
       for (let i = net.start[j]!; i < net.start[j + 1]!; i++) {
         const b = net.at[i]!;
-        if (b !== stBead[s] && net.rank[b]! >= 0) options.push(b);
+        if (b !== stBead[s] && net.rank[b]! >= 0) insertByRank(net.rank, b);
       }
-      options.sort((x, y) => net.rank[y]! - net.rank[x]!);
       for (const b of options) {
         const out = net.ends[2 * b] === j ? net.ends[2 * b + 1]! : net.ends[2 * b]!;
         const key = 2 * b + (out === net.ends[2 * b] ? 0 : 1);
-        if (seen.has(key)) continue;
-        seen.add(key);
+        if (net.seen[key] === search) continue;
+        net.seen[key] = search;
         stJ.push(out);
         stBead.push(b);
         stParent.push(s);
-        const id = stJ.length - 1;
-        if (out === target) return unwind(id, stBead, stParent);
-        next.push(id);
+        if (out === target) return unwind(stJ.length - 1);
       }
     }
-    layer = next;
+    begin = end;
   }
   return null;
 }
 
-function unwind(id: number, stBead: readonly number[], stParent: readonly number[]): number[] {
+/** Keeps `options` in falling rank: the later-added bead first. */
+function insertByRank(rank: readonly number[], b: number): void {
+  let i = options.length;
+  options.push(b);
+  while (i > 0 && rank[options[i - 1]!]! < rank[b]!) {
+    options[i] = options[i - 1]!;
+    i--;
+  }
+  options[i] = b;
+}
+
+function unwind(id: number): number[] {
   const route: number[] = [];
   for (let s = id; stParent[s]! !== -1; s = stParent[s]!) route.push(stBead[s]!);
   return route.reverse();

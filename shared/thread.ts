@@ -41,20 +41,8 @@ export function startCorners(shared: number, dir: 1 | -1): number[] {
   return out;
 }
 
-/** The places met going round from corner `start`, each with the corner the thread enters and leaves it by. */
-export function roundTrip(start: number, dir: 1 | -1): Array<[place: number, from: number, to: number]> {
-  const out: Array<[number, number, number]> = [];
-  for (let i = 0; i < 4; i++) {
-    if (dir === 1) {
-      const p = (start + 1 + i) % 4;
-      out.push([p, (p + 3) % 4, p]);
-    } else {
-      const p = (start - i + 4) % 4;
-      out.push([p, p, (p + 3) % 4]);
-    }
-  }
-  return out;
-}
+/** The n-th place (0-3) met going round from corner `start`; the thread enters it at corner p-1 (forward) or p (backward). */
+export const placeAt = (start: number, dir: 1 | -1, n: number): number => (dir === 1 ? (start + 1 + n) % 4 : (start - n + 4) % 4);
 
 class Sim {
   readonly rank: number[];
@@ -139,11 +127,12 @@ class Sim {
     const picked: number[] = [];
     const actions: StepAction[] = [];
     let last = -1;
-    const trip = roundTrip(corner, dir);
-    if (u.shared === 0) trip.push(trip[0]!);
-    for (let i = 0; i < trip.length; i++) {
-      const [p, from, to] = trip[i]!;
+    let at = u.corners[corner]!;
+    const steps = u.shared === 0 ? 5 : 4;
+    for (let i = 0; i < steps; i++) {
+      const p = placeAt(corner, dir, i % 4);
       const bead = u.beads[p]!;
+      const to = u.corners[dir === 1 ? p : (p + 3) % 4]!;
       const pickup = i < 4 && ((u.shared >> p) & 1) === 0;
       if (pickup) {
         this.rank[bead] = this.next++;
@@ -151,11 +140,12 @@ class Sim {
       }
       if (record) {
         actions.push({ kind: pickup ? 'pickup' : 'pass', bead, place: PLACES[p]! });
-        this.passes.push({ bead, unit: -1, kind: pickup ? 'pickup' : 'close', from: u.corners[from]!, to: u.corners[to]! });
+        this.passes.push({ bead, unit: -1, kind: pickup ? 'pickup' : 'close', from: at, to });
       }
+      at = to;
       last = bead;
     }
-    return { pos: { j: u.corners[trip[trip.length - 1]![2]]!, last }, picked, actions };
+    return { pos: { j: at, last }, picked, actions };
   }
 
   private doUnit(id: number, u: WeaveUnit, dir: 1 | -1): void {
@@ -175,13 +165,13 @@ class Sim {
     const { pos, picked, actions } = this.goRound(u, dir, start.corner, true);
     for (let i = mark; i < this.passes.length; i++) this.passes[i]!.unit = id;
     this.colour(u, picked);
-    const colours = new Set(picked.map((b) => this.color[b]));
+    const firstColour = this.color[picked[0]!];
     this.steps[id] = {
       unit: id,
       direction: dir === 1 ? 'forward' : 'backward',
       startCorner: CORNERS[start.corner]!,
       firstPlace: PLACES[this.w.beadOwnerPlace[picked[0]!]!]!,
-      cue: colours.size > 1,
+      cue: picked.some((b) => this.color[b] !== firstColour),
       actions,
       moveOn: [],
     };
@@ -234,7 +224,7 @@ function buildNet(w: Weave, rank: number[]): Net {
     at[fill[a]!++] = b;
     if (z !== a) at[fill[z]!++] = b;
   }
-  return { start: count, at, ends: w.beadEnds, rank };
+  return { start: count, at, ends: w.beadEnds, rank, seen: new Int32Array(2 * beads), search: 0 };
 }
 
 /** Follows the thread through a woven net. Never throws; an unreachable start is `no-passage` on that unit. */

@@ -58,12 +58,14 @@ function unitsOf(w: Weave, t: Thread, g: Geometry, id: (old: number) => number |
 function assembleModel(ast: PatternAst, w: Weave, t: Thread, g: Geometry, layout: LayoutInfo, diagnostics: Diagnostic[]): Model {
   const id = (old: number): number | null => (old < 0 ? null : t.rank[old]!);
   const ranked = (b: number): number => t.rank[b]!;
-  const passes: ThreadPass[] = t.passes.map((p) => ({ ...p, bead: ranked(p.bead) }));
-  const steps: UnitStep[] = t.steps.map((s) => ({
-    ...s,
-    actions: s.actions.map((a) => ({ ...a, bead: ranked(a.bead) })),
-    moveOn: s.moveOn.map(ranked),
-  }));
+  // The thread's records are renumbered in place: they are built for this model and for nothing else.
+  const passes: ThreadPass[] = t.passes;
+  for (const p of passes) p.bead = ranked(p.bead);
+  const steps: UnitStep[] = t.steps;
+  for (const s of steps) {
+    for (const a of s.actions) a.bead = ranked(a.bead);
+    for (let i = 0; i < s.moveOn.length; i++) s.moveOn[i] = ranked(s.moveOn[i]!);
+  }
   const rows: RowInfo[] = w.rows.map((r) => ({
     row: r.row,
     word: r.word,

@@ -106,6 +106,16 @@ describe('the rhythm of right angle weave (common practice)', () => {
     }
   });
 
+  test('an increase at the end of a row, after a unit that went backward, is reached through its two new beads', () => {
+    // Source: NOTATION.md section 4 ("there is no base bead to go on through").
+    const m = compileAst(pattern('flat', ['AAAA', '*AAAA AA +AAA'])).value.model;
+    const before = m.steps[2]!;
+    expect(before.direction).toBe('backward');
+    expect(m.steps[3]).toMatchObject({ direction: 'forward', startCorner: 'near|base' });
+    expect(new Set(before.moveOn)).toEqual(new Set(newBeads(m, 2)));
+    expect(before.moveOn.length).toBe(2);
+  });
+
   test('the unit closing row 1 of a tube alternates pick-ups and passes', () => {
     // Source: NOTATION.md section 4, rule 3 (the split case).
     const m = compileAst(pattern('tube', tubeRows(5, 1))).value.model;

@@ -1,0 +1,59 @@
+/**
+ * The engine on large flat panels: compiling 200,000 units against 100,000
+ * (linear work gives 2; the goal allows 2.2), and the heap the model and
+ * thread path hold per unit, measured in a child process that may force
+ * garbage collection so the figure is what stays, not what is in flight.
+ */
+import { execFileSync } from 'node:child_process';
+import { fileURLToPath } from 'node:url';
+import { medianMs, type Bench } from './harness.js';
+import { compile } from '../shared/compile.js';
+
+/** A flat panel `width` units wide: groups keep the text small, the model is full size. */
+export function panelText(width: number, rows: number): string {
+  return [
+    'title: Bench panel',
+    'colors:',
+    '  A #f4f1ea',
+    '  B #2e6f8e',
+    `row 1: AAAA (ABA)x${width - 1}`,
+    `rows 2-${rows}: BAB (AB)x${width - 1}`,
+    '',
+  ].join('\n');
+}
+
+const SMALL = panelText(500, 200);
+const LARGE = panelText(500, 400);
+const CHILD = 'FOURFOLD_WEAVE_BENCH_CHILD';
+
+/** Heap held by one compiled 200,000-unit model, in bytes per unit (run with --expose-gc). */
+function heldPerUnit(): number {
+  const gc = (globalThis as { gc?: () => void }).gc!;
+  gc();
+  const before = process.memoryUsage().heapUsed;
+  const held = compile(LARGE);
+  gc();
+  const after = process.memoryUsage().heapUsed;
+  return (after - before) / held.value.model.units.length;
+}
+
+if (process.env[CHILD] === '1') process.stdout.write(`${heldPerUnit()}\n`);
+
+const bench: Bench = {
+  name: 'weave engine',
+  async run() {
+    const units = (text: string) => compile(text).value.model.units.length;
+    if (units(SMALL) !== 100_000 || units(LARGE) !== 200_000) throw new Error('bench panels are not the sizes they claim');
+    const small = await medianMs(() => compile(SMALL), 3, 1);
+    const large = await medianMs(() => compile(LARGE), 3, 1);
+    const perUnit = Number(
+      execFileSync(process.execPath, ['--expose-gc', fileURLToPath(import.meta.url)], { env: { ...process.env, [CHILD]: '1' }, encoding: 'utf8' }).trim(),
+    );
+    return [
+      { name: 'compile 200,000-unit panel vs 100,000-unit panel', value: large, baseline: small, unit: 'ms', goal: { atMost: 2.2 } },
+      { name: 'heap held by model and thread path per unit (200,000 units)', value: perUnit, unit: 'bytes', goal: { atMost: 2048 } },
+    ];
+  },
+};
+
+export default bench;
