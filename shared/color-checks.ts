@@ -51,7 +51,7 @@ export function similarColors(ast: PatternAst, threshold = DEFAULT_SIMILAR_COLOR
         severity: 'warning',
         id: 'similar-colors',
         message:
-          `colour ${second.key} (${second.hex}) is hard to tell from ${first.key} (${first.hex}) on a chart: ` +
+          `colour ${second.key} (${second.written}) is hard to tell from ${first.key} (${first.written}) on a chart: ` +
           `their CIEDE2000 distance is ${oneDecimal(d)}, below ${threshold}.`,
         range: second.colorRange,
         hint: 'Pick a colour further from the other, or merge the two keys if they are the same bead.',

@@ -74,7 +74,7 @@ function kitContent(model: Model, t: Tally, o: KitOptions): KitContent {
         name: c.name,
         hex: c.hex,
         count: String(c.count),
-        grams: `${c.grams.low}-${c.grams.high} g`,
+        grams: `${c.grams.low.toFixed(2)}-${c.grams.high.toFixed(2)} g`,
         buy: buyWords(c.buyGrams, o.packGrams),
       })),
     thread: [
@@ -93,13 +93,15 @@ function kitContent(model: Model, t: Tally, o: KitOptions): KitContent {
   };
 }
 
+const bullets = (lines: string[]): string[] => lines.map((l) => `- ${mdCell(l)}`);
+
 export function renderKitMarkdown(model: Model, t: Tally, o: KitOptions): string {
   const k = kitContent(model, t, o);
-  const out = [`# ${mdCell(k.title)}`, '', ...k.about.map((l) => `- ${mdCell(l)}`), '', '## Beads', ''];
+  const out = [`# ${mdCell(k.title)}`, '', ...bullets(k.about), '', '## Beads', ''];
   out.push('| key | colour | name | count | weight | buy |', '|---|---|---|---:|---:|---:|');
   for (const c of k.colors)
     out.push(`| ${c.key} | ${c.hex} | ${mdCell(c.name)} | ${c.count} | ${c.grams} | ${c.buy} |`);
-  out.push('', '## Thread', '', ...k.thread.map(mdCell), '', '## Needle and thread size', '', ...k.tools.map(mdCell));
+  out.push('', '## Thread', '', ...bullets(k.thread), '', '## Needle and thread size', '', ...bullets(k.tools));
   out.push('', '## Caution', '', `**${mdCell(k.caution)}**`, '');
   return out.join('\n');
 }
