@@ -5,6 +5,7 @@
 import { expect } from 'vitest';
 import { PNG } from 'pngjs';
 import { contrastRatio, parseHex } from '../../shared/chart/contrast.js';
+import type { EmbeddedFont } from '../../shared/chart/elements.js';
 import type { Scene } from '../../shared/chart/scene-types.js';
 import type { Model } from '../../shared/model.js';
 import { flatten, isWellFormed } from './svg-tree.js';
@@ -34,8 +35,8 @@ export function checkLabelContrast(scene: Scene): void {
 }
 
 /** Both emitters give the same elements, in the same order, with the same attributes and text. */
-export function checkParity(scene: Scene, svg: string): void {
-  const { markup, handle } = drawOnSvgdom(scene);
+export function checkParity(scene: Scene, svg: string, fonts: readonly EmbeddedFont[] = []): void {
+  const { markup, handle } = drawOnSvgdom(scene, fonts);
   try {
     const drawn = flatten(markup);
     const written = flatten(svg);
@@ -49,7 +50,7 @@ export function checkParity(scene: Scene, svg: string): void {
 }
 
 /**
- * Rasterised chart: each bead, sampled on its axis a third of its length from
+ * Rasterised chart: each bead, sampled on its axis a quarter of its length from
  * the centre (clear of the key letter), shows its palette colour.
  */
 export function checkRaster(model: Model, scene: Scene, png: Buffer, dpi: number, tolerance = 6): void {
@@ -62,7 +63,7 @@ export function checkRaster(model: Model, scene: Scene, png: Buffer, dpi: number
   for (const item of scene.items) {
     if (item.kind !== 'bead' || item.length < item.thickness * 1.3) continue;
     const rad = (item.angle * Math.PI) / 180;
-    const off = item.length * 0.3;
+    const off = item.length * 0.25;
     const x = Math.floor((item.x + Math.cos(rad) * off) * px);
     const y = Math.floor((item.y + Math.sin(rad) * off) * px);
     const i = (y * image.width + x) * 4;
