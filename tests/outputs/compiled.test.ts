@@ -63,6 +63,19 @@ describe('outputs on closed forms', () => {
   });
 });
 
+describe('outputs of a pattern with errors (the server shows what could be built)', () => {
+  it('builds steps and a tally of the part that exists, without throwing', () => {
+    const text = `${header()}row 1: AAAA ABA\nrow 2: AAA ABB AB\nrow 3: BBB BA\n`;
+    const result = compile(text);
+    expect(result.diagnostics.map((d) => d.id)).toContain('bead-count');
+    const doc = buildSteps(result.value.model);
+    expect(XMLValidator.validate(renderStepsHtml(doc))).toBe(true);
+    const t = tally(result.value.model, {}).value;
+    expect(t.beads).toBe(result.value.model.beads.length);
+    expect(t.rows.reduce((s, r) => s + r.beads, 0)).toBe(t.beads);
+  });
+});
+
 describe('material checks on written patterns', () => {
   it('warns on the second colour line when two colours look alike', () => {
     const text = 'title: Close\ncolors:\n  A #2e6f8e teal\n  B #f4f1ea chalk\n  C #2f6f8e teal too\nrow 1: AAAA BCB\n';
