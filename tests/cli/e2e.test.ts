@@ -6,6 +6,7 @@ import { existsSync, readFileSync } from 'node:fs';
 import { fileURLToPath } from 'node:url';
 import { execa } from 'execa';
 import { beforeAll, describe, expect, it } from 'vitest';
+import { hasAnsi } from './fake-io.js';
 
 const root = fileURLToPath(new URL('../../', import.meta.url));
 const fixtures = fileURLToPath(new URL('./fixtures/', import.meta.url));
@@ -35,7 +36,7 @@ describe('the built fourfold command', () => {
     expect(r.exitCode).toBe(1);
     expect(r.stderr).toContain('broken.ffp:10:12: error[bead-count]');
     expect(r.stderr).toContain('broken.ffp:11:5: error[row-number]');
-    expect(r.stderr).not.toMatch(/\x1b\[/);
+    expect(hasAnsi(r.stderr)).toBe(false);
   });
 
   it('check - reads standard input; --format json goes to stdout', async () => {

@@ -25,3 +25,13 @@ export function fakeIO(
     err: () => err,
   };
 }
+
+const ESC = '\u001b[';
+/** Whether text holds an ANSI escape (colour, bold). */
+export const hasAnsi = (text: string): boolean => text.includes(ESC);
+/** Text with its ANSI colour escapes removed. */
+export const stripAnsi = (text: string): string =>
+  text
+    .split(ESC)
+    .map((part, i) => (i === 0 ? part : part.replace(/^[0-9;]*m/, '')))
+    .join('');
