@@ -53,10 +53,12 @@ export function badColor(key: string, written: string, range: SourceRange): Diag
   };
 }
 
+const WHAT: Record<string, string> = { beads: 'bead size and shape', layout: 'layout', order: 'key order' };
+
 const enumError = (entry: HeaderEntry, allowed: readonly string[]): Diagnostic => ({
   severity: 'error',
   id: 'bad-header-value',
-  message: `'${entry.value}' is not a ${entry.key}.${didYouMean(entry.value, allowed)}`,
+  message: `'${entry.value}' is not a ${WHAT[entry.key] ?? entry.key}.${didYouMean(entry.value, allowed)}`,
   range: entry.valueRange,
   hint: `${entry.key} is one of: ${allowed.join(', ')}`,
 });
