@@ -73,6 +73,16 @@ describe('fourfold check', () => {
     expect(r.out).toBe('');
   });
 
+  it('warnings alone exit 0 and keep ok true; the material checks are included', async () => {
+    const text = 'title: Two Chalks\ncolors:\n  A  #F4F1EA  chalk\n  B  #F4F1EB  chalk two\n\nrow 1: AAAA BAB ABA\n';
+    const { code, json } = await checkJson(['-'], fakeIO({ cwd: fixtures, stdin: text }));
+    expect(code).toBe(0);
+    expect(json.files[0]).toMatchObject({
+      ok: true,
+      diagnostics: [{ severity: 'warning', id: 'similar-colors', line: 4 }],
+    });
+  });
+
   it('reports every mistake of a file in one run, each with line, column and a hint', async () => {
     const r = await check(['broken.ffp']);
     expect(r.code).toBe(1);
@@ -142,6 +152,13 @@ describe('fourfold check', () => {
     expect(code).toBe(1);
     expect(json.files[0]!.diagnostics).toHaveLength(1);
     expect(json.files[0]!.diagnostics[0]!.severity).toBe('error');
+  });
+
+  it('a file over the 1 MiB limit of NOTATION.md section 7 is refused with too-large', async () => {
+    const big = `title: Huge\n# ${'x'.repeat(2 * 1024 * 1024)}\n`;
+    const { code, json } = await checkJson(['-'], fakeIO({ cwd: fixtures, stdin: big }));
+    expect(code).toBe(1);
+    expect(json.files[0]!.diagnostics.map((d) => d.id)).toEqual(['too-large']);
   });
 
   it('colour only on a terminal, and never with NO_COLOR', async () => {
