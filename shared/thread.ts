@@ -129,10 +129,28 @@ class Sim {
     let last = -1;
     let at = u.corners[corner]!;
     const steps = u.shared === 0 ? 5 : 4;
+    const ends = this.w.beadEnds;
     for (let i = 0; i < steps; i++) {
       const p = placeAt(corner, dir, i % 4);
       const bead = u.beads[p]!;
-      const to = u.corners[dir === 1 ? p : (p + 3) % 4]!;
+      const e0 = ends[2 * bead]!;
+      const e1 = ends[2 * bead + 1]!;
+      if (at !== e0 && at !== e1) {
+        // After a skip the shared beads of a unit do not meet: the thread crosses the bead passed over.
+        const entry = u.corners[dir === 1 ? p : (p + 3) % 4] === e0 ? e1 : e0;
+        const bridge = findRoute(this.net, at, last, entry, 4) ?? [];
+        for (const b of bridge) {
+          const out = ends[2 * b] === at ? ends[2 * b + 1]! : ends[2 * b]!;
+          if (record) {
+            actions.push({ kind: 'pass', bead: b, place: 'base' });
+            this.passes.push({ bead: b, unit: -1, kind: 'close', from: at, to: out });
+          }
+          at = out;
+          last = b;
+        }
+        at = entry;
+      }
+      const to = at === e0 ? e1 : e0;
       const pickup = i < 4 && ((u.shared >> p) & 1) === 0;
       if (pickup) {
         this.rank[bead] = this.next++;

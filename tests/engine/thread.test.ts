@@ -134,3 +134,18 @@ describe('the rhythm of right angle weave (common practice)', () => {
     expect(m.steps.map((s) => s.cue)).toEqual([false, true, false]);
   });
 });
+
+describe('decreases in closed rows', () => {
+  test('after a skip the thread crosses the bead passed over, and the path stays continuous', () => {
+    // A tube of 6 narrowing to 5: the skipped bead is crossed on the way round the unit after it.
+    const { value, diagnostics } = compileAst(pattern('tube', [...tubeRows(6, 2), 'AAA AA - AA AA A']));
+    expect(diagnostics).toEqual([]);
+    const m = value.model;
+    for (let i = 1; i < m.thread.length; i++) expect(m.thread[i]!.from).toBe(m.thread[i - 1]!.to);
+    for (const p of m.thread) expect(new Set(m.beads[p.bead]!.junctions)).toEqual(new Set([p.from, p.to]));
+    const row2Tops = m.rows[1]!.units.map((u) => m.units[u]!.places.top);
+    const skipped = row2Tops[2]!;
+    expect(m.units.filter((u) => u.row === 3).some((u) => Object.values(u.places).includes(skipped))).toBe(false);
+    expect(m.thread.some((p) => p.bead === skipped && m.units[p.unit]!.row === 3)).toBe(true);
+  });
+});
