@@ -6,7 +6,15 @@
  */
 import { hasErrors } from '../../shared/diagnostic.js';
 import type { Model } from '../../shared/model.js';
-import { MM_PER_INCH, tally, type Tally, type TallyOptions } from '../../shared/tally.js';
+import {
+  DEFAULT_SPARE,
+  DEFAULT_TAIL_MM,
+  DEFAULT_WORKING_LENGTH_MM,
+  MM_PER_INCH,
+  tally,
+  type Tally,
+  type TallyOptions,
+} from '../../shared/tally.js';
 import { EXIT_FAILURE, EXIT_OK, EXIT_PATTERN_ERRORS, useColor, type CliIO, type ParsedCommand } from '../command.js';
 import { compilePattern } from '../read-input.js';
 
@@ -24,9 +32,9 @@ export type MaterialOptions = Required<Omit<TallyOptions, 'packGrams' | 'beadsPe
 export function materialOptions(cmd: ParsedCommand): MaterialOptions {
   const o = cmd.options;
   return {
-    spare: typeof o.spare === 'number' ? o.spare : 0.1,
-    workingLengthMm: typeof o.workingLengthMm === 'number' ? o.workingLengthMm : 1500,
-    tailMm: typeof o.tailMm === 'number' ? o.tailMm : 150,
+    spare: typeof o.spare === 'number' ? o.spare : DEFAULT_SPARE,
+    workingLengthMm: typeof o.workingLengthMm === 'number' ? o.workingLengthMm : DEFAULT_WORKING_LENGTH_MM,
+    tailMm: typeof o.tailMm === 'number' ? o.tailMm : DEFAULT_TAIL_MM,
     ...(typeof o.pack === 'number' ? { packGrams: o.pack } : {}),
   };
 }
