@@ -1,0 +1,56 @@
+/** startServer (what `fourfold serve` runs) on an existing database given by DATABASE_URL: migrate, seed once, serve, close. */
+import { resolve } from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { connect } from '../../server/db/connect.js';
+import { startServer } from '../../server/main.js';
+import { freshDatabaseUrl } from './harness.js';
+
+const root = resolve(import.meta.dirname, '../..');
+
+async function json(url: string, init?: RequestInit): Promise<{ status: number; body: any }> {
+  const res = await fetch(url, { ...init, headers: { 'Content-Type': 'application/json', ...(init?.headers ?? {}) } });
+  return { status: res.status, body: await res.json() };
+}
+
+describe('startServer', () => {
+  it('migrates, seeds the demo studio once with the examples, and stops cleanly', async () => {
+    const env = { DATABASE_URL: await freshDatabaseUrl(), NODE_ENV: 'development', FOURFOLD_DEMO_PASSWORD: 'demo-pass-123' };
+    const lines: string[] = [];
+    const first = await startServer({ port: 0, demo: true, examplesDir: resolve(root, 'examples'), root, env, log: (l) => lines.push(l) });
+    try {
+      expect(first.seeded).toBe(true);
+      expect(lines).toContain('applied migrations: 0001-initial');
+      const login = await json(`${first.url}/api/auth/login`, { method: 'POST', body: JSON.stringify({ email: 'designer@example.com', password: 'demo-pass-123' }) });
+      expect(login.status).toBe(200);
+      const list = await json(`${first.url}/api/patterns`, { headers: { Authorization: `Bearer ${login.body.token}` } });
+      expect(list.body.total).toBeGreaterThan(0);
+      expect(list.body.items.every((p: { owner: { name: string } }) => p.owner.name === 'Ines Marlow')).toBe(true);
+    } finally {
+      await first.close();
+    }
+    await expect(fetch(`${first.url}/api/health`)).rejects.toThrow();
+    const again = await startServer({ port: 0, demo: true, examplesDir: resolve(root, 'examples'), root, env, log: () => {} });
+    try {
+      expect(again.seeded).toBe(false);
+    } finally {
+      await again.close();
+    }
+  });
+
+  it('never seeds the demo in production', async () => {
+    const env = { DATABASE_URL: await freshDatabaseUrl(), NODE_ENV: 'production', SMTP_URL: 'smtp://127.0.0.1:9' };
+    const running = await startServer({ port: 0, demo: true, root, env, log: () => {} });
+    try {
+      expect(running.seeded).toBe(false);
+      expect(running.demoPassword).toBeNull();
+      const db = connect(env.DATABASE_URL);
+      try {
+        expect(await db.models.User.count()).toBe(0);
+      } finally {
+        await db.close();
+      }
+    } finally {
+      await running.close();
+    }
+  });
+});
