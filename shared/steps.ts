@@ -28,7 +28,7 @@ export interface StepUnit {
   cue?: string;
   /** Going round the unit: pick up, then pass through to close it. */
   round: StepMove[];
-  /** Beads to pass through to reach the next unit (empty when none, or last). */
+  /** Beads to pass through to reach the next unit, in the next row too (empty when the thread is already there). */
   moveOn: BeadRef[];
   /** Side beads the row shows once this unit is done: the count to find one's place by. */
   sideBeads: number;
