@@ -66,4 +66,19 @@ describe('the built fourfold command', () => {
     expect(r.exitCode).toBe(0);
     expect((JSON.parse(r.stdout) as { schema: string }).schema).toBe('fourfold.model/1');
   });
+
+  it('a reader that stops early (like head) is not an error: exit 0, nothing on stderr', async () => {
+    // About 2 MB of model JSON, far more than a pipe holds, so the writer meets the closed pipe.
+    const big = 'title: Big\ncolors:\n  A  #F4F1EA  chalk\n\nrow 1: AAAA (AAA)x19\nrows 2-60: AAA (AA)x19\n';
+    const child = execa('node', [launcher, 'model', '-'], {
+      cwd: fixtures,
+      input: big,
+      reject: false,
+      buffer: { stdout: false },
+    });
+    child.stdout.once('data', () => child.stdout.destroy());
+    const r = await child;
+    expect(r.stderr).toBe('');
+    expect(r.exitCode).toBe(0);
+  });
 });
