@@ -328,7 +328,8 @@ function placeLines(lines: Line[], comments: Comment[], ix: LineIndex, diagnosti
         return;
       }
       if (seenRow) err(line.keyRange, `the header line '${line.key}:' comes after a row`, 'header lines go before the first row');
-      entries.push({ ...line, leadingComments: leading });
+      const { key, keyRange, value, valueRange, range } = line;
+      entries.push({ key, value, range, keyRange, valueRange, leadingComments: leading });
       return;
     }
     const def = colorLine(line, inColors && !seenRow, ix, diagnostics);
