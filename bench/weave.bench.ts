@@ -3,6 +3,7 @@
  * (linear work gives 2; the goal allows 2.2), and the heap the model and
  * thread path hold per unit, measured in a child process that may force
  * garbage collection so the figure is what stays, not what is in flight.
+ * The two sizes are timed in turns, five times each, and the medians compared.
  */
 import { execFileSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
@@ -44,8 +45,16 @@ const bench: Bench = {
   async run() {
     const units = (text: string) => compile(text).value.model.units.length;
     if (units(SMALL) !== 100_000 || units(LARGE) !== 200_000) throw new Error('bench panels are not the sizes they claim');
-    const small = await medianMs(() => compile(SMALL), 3, 1);
-    const large = await medianMs(() => compile(LARGE), 3, 1);
+    // Interleaved, so a change in the machine's load during the run falls on both sizes alike.
+    const smallRuns: number[] = [];
+    const largeRuns: number[] = [];
+    for (let i = 0; i < 5; i++) {
+      smallRuns.push(await medianMs(() => compile(SMALL), 1, 0));
+      largeRuns.push(await medianMs(() => compile(LARGE), 1, 0));
+    }
+    const median = (xs: number[]) => xs.sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
+    const small = median(smallRuns);
+    const large = median(largeRuns);
     const perUnit = Number(
       execFileSync(process.execPath, ['--expose-gc', fileURLToPath(import.meta.url)], { env: { ...process.env, [CHILD]: '1' }, encoding: 'utf8' }).trim(),
     );

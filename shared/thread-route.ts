@@ -75,8 +75,11 @@ function insertByRank(rank: readonly number[], b: number): void {
   options[i] = b;
 }
 
+/** The route to state `id`, in an array of exactly its length (the model keeps it as a unit's `moveOn`). */
 function unwind(id: number): number[] {
-  const route: number[] = [];
-  for (let s = id; stParent[s]! !== -1; s = stParent[s]!) route.push(stBead[s]!);
-  return route.reverse();
+  let length = 0;
+  for (let s = id; stParent[s]! !== -1; s = stParent[s]!) length++;
+  const route = new Array<number>(length);
+  for (let s = id; stParent[s]! !== -1; s = stParent[s]!) route[--length] = stBead[s]!;
+  return route;
 }

@@ -125,7 +125,9 @@ class Sim {
   /** Picks up at free places and passes shared ones; a unit sharing nothing passes its first bead again. */
   private goRound(u: WeaveUnit, dir: 1 | -1, corner: number, record: boolean): { pos: Pos; picked: number[]; actions: StepAction[] } {
     const picked: number[] = [];
-    const actions: StepAction[] = [];
+    // Sized up front: a large model holds hundreds of thousands of these lists.
+    const actions: StepAction[] = record ? new Array<StepAction>(u.shared === 0 ? 5 : 4) : [];
+    let k = 0;
     let last = -1;
     let at = u.corners[corner]!;
     const steps = u.shared === 0 ? 5 : 4;
@@ -142,7 +144,7 @@ class Sim {
         for (const b of bridge) {
           const out = ends[2 * b] === at ? ends[2 * b + 1]! : ends[2 * b]!;
           if (record) {
-            actions.push({ kind: 'pass', bead: b, place: 'base' });
+            actions[k++] = { kind: 'pass', bead: b, place: 'base' };
             this.passes.push({ bead: b, unit: -1, kind: 'close', from: at, to: out });
           }
           at = out;
@@ -157,7 +159,7 @@ class Sim {
         picked.push(bead);
       }
       if (record) {
-        actions.push({ kind: pickup ? 'pickup' : 'pass', bead, place: PLACES[p]! });
+        actions[k++] = { kind: pickup ? 'pickup' : 'pass', bead, place: PLACES[p]! };
         this.passes.push({ bead, unit: -1, kind: pickup ? 'pickup' : 'close', from: at, to });
       }
       at = to;
@@ -199,12 +201,12 @@ class Sim {
 
   private recordPassage(route: number[], unit: number): void {
     const ends = this.w.beadEnds;
-    const moveOn = this.steps[unit]!.moveOn;
+    // Each route is a fresh array of its exact length, so the step keeps it as it is.
+    this.steps[unit]!.moveOn = route;
     let j = this.pos.j;
     for (const bead of route) {
       const to = ends[2 * bead] === j ? ends[2 * bead + 1]! : ends[2 * bead]!;
       this.passes.push({ bead, unit, kind: 'position', from: j, to });
-      moveOn.push(bead);
       j = to;
     }
   }

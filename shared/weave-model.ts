@@ -3,14 +3,21 @@
  * (weave.ts), the thread (thread.ts) and the geometry (layout.ts). Bead ids
  * become pick-up ranks here, so a bead's id says when the thread added it.
  */
-import { sortDiagnostics, type Diagnostic, type Result } from './diagnostic.js';
+import { sortDiagnostics, type Diagnostic, type Result, type SourceRange } from './diagnostic.js';
 import type { PatternAst } from '../parser/ast.js';
-import type { Bead, LayoutInfo, Model, RowInfo, ThreadPass, Unit, UnitStep } from './model.js';
+import type { Bead, LayoutInfo, Model, Place, RowInfo, ThreadPass, Unit, UnitStep } from './model.js';
 import { popcount, weave, type Weave } from './weave.js';
 import { PLACES, thread, type Thread } from './thread.js';
 import { layout, type Geometry } from './layout.js';
 
 const r4 = (n: number): number => Math.round(n * 1e4) / 1e4;
+
+/** Every `Bead.places` value there can be, made once and shared (a large model has a few hundred thousand beads). */
+const PLACE_LISTS: readonly Place[][] = Array.from({ length: 20 }, (_, i) => {
+  const owner = PLACES[Math.floor(i / 5)]!;
+  const sharer = PLACES[i % 5];
+  return sharer === undefined ? [owner] : [owner, sharer];
+});
 
 function beadsOf(w: Weave, t: Thread, g: Geometry): Bead[] {
   const beads = new Array<Bead>(w.beadOwner.length);
@@ -20,7 +27,7 @@ function beadsOf(w: Weave, t: Thread, g: Geometry): Bead[] {
       id: t.rank[old]!,
       color: t.color[old]!,
       units: sharer === -1 ? [w.beadOwner[old]!] : [w.beadOwner[old]!, sharer],
-      places: sharer === -1 ? [PLACES[w.beadOwnerPlace[old]!]!] : [PLACES[w.beadOwnerPlace[old]!]!, PLACES[w.beadSharerPlace[old]!]!],
+      places: PLACE_LISTS[w.beadOwnerPlace[old]! * 5 + (sharer === -1 ? 4 : w.beadSharerPlace[old]!)]!,
       junctions: [w.beadEnds[2 * old]!, w.beadEnds[2 * old + 1]!],
       x: r4(g.bx[old]!),
       y: r4(g.by[old]!),
@@ -34,6 +41,13 @@ function beadsOf(w: Weave, t: Thread, g: Geometry): Bead[] {
 }
 
 function unitsOf(w: Weave, t: Thread, g: Geometry, id: (old: number) => number | null): Unit[] {
+  // Units repeated by a group or a row range come from one node: they share one source object.
+  const sources = new Map<SourceRange, Unit['source']>();
+  const sourceOf = (r: SourceRange): Unit['source'] => {
+    let s = sources.get(r);
+    if (!s) sources.set(r, (s = { line: r.line, column: r.column, endLine: r.endLine, endColumn: r.endColumn }));
+    return s;
+  };
   return w.units.map((u, i) => {
     const step = t.steps[i]!;
     const unit: Unit = {
@@ -47,7 +61,7 @@ function unitsOf(w: Weave, t: Thread, g: Geometry, id: (old: number) => number |
       angle: r4(g.uAngle[i]!),
       direction: step.direction,
       startCorner: step.startCorner,
-      source: { line: u.range.line, column: u.range.column, endLine: u.range.endLine, endColumn: u.range.endColumn },
+      source: sourceOf(u.range),
     };
     // A failed unit shows only the beads it would have shared; its own places stay empty.
     if (u.failed) unit.failed = true;
