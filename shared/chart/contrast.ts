@@ -38,3 +38,8 @@ export function labelColor(fill: string, candidates: readonly [string, string] =
   const [first, second] = candidates;
   return contrastRatio(fill, second) > contrastRatio(fill, first) ? second : first;
 }
+
+/** `labelColor` with black and white, once per palette colour rather than once per bead. */
+export function labelColors(hexes: Iterable<string>): Map<string, string> {
+  return new Map([...hexes].map((hex) => [hex, labelColor(hex)]));
+}

@@ -1,16 +1,35 @@
 /**
- * Scene to SVG elements: tags and attributes in a fixed order, values as
- * strings. Both emitters walk this same tree, which is how the text output
- * and the svg.js drawing stay the same chart.
+ * Scene to SVG elements: tags and attributes in a fixed order. Both emitters
+ * are driven by this one walk (they differ only in the sink that receives
+ * it), which is how the text output and the svg.js drawing stay the same
+ * chart. The walk builds no tree of its own: a 5,000-bead chart would
+ * otherwise allocate tens of thousands of short-lived arrays.
  */
 import { round2 } from './geometry.js';
 import type { BeadPrim, DataAttrs, HatchPattern, PathPrim, Primitive, RectPrim, Scene, TextPrim } from './scene-types.js';
 
-export interface SvgNode {
-  tag: string;
-  attrs: Array<[string, string]>;
-  text?: string;
-  children?: SvgNode[];
+/** What an emitter does with the walk: open an element, set attributes, add text, close it. */
+export interface SvgSink {
+  open(tag: string): void;
+  attr(name: string, value: string | number): void;
+  text(text: string): void;
+  close(tag: string): void;
+}
+
+/**
+ * A scene number (already rounded to 2 decimals) as text: the same digits
+ * as `String(n)` gives, built from whole hundredths because formatting small
+ * integers is several times faster than formatting doubles.
+ */
+export function formatNumber(n: number): string {
+  const cents = Math.round(n * 100);
+  if (!Number.isSafeInteger(cents) || Math.abs(n * 100 - cents) > 1e-6) return String(n);
+  const abs = Math.abs(cents);
+  const whole = Math.floor(abs / 100);
+  const frac = abs % 100;
+  const sign = cents < 0 ? '-' : '';
+  if (frac === 0) return `${sign}${whole}`;
+  return `${sign}${whole}.${frac < 10 ? `0${frac}` : frac % 10 === 0 ? frac / 10 : frac}`;
 }
 
 /** One embedded font face: a subset of the bundled font, base64-encoded by the caller. */
@@ -21,126 +40,145 @@ export interface EmbeddedFont {
   base64: string;
 }
 
-const num = (n: number): string => String(n);
-
-const dataAttrs = (data: DataAttrs): Array<[string, string]> => {
-  const out: Array<[string, string]> = [];
-  if (data.unit !== undefined) out.push(['data-unit', num(data.unit)]);
-  if (data.row !== undefined) out.push(['data-row', num(data.row)]);
-  if (data.pass !== undefined) out.push(['data-pass', num(data.pass)]);
-  if (data.kind !== undefined) out.push(['data-kind', data.kind]);
-  if (data.key !== undefined) out.push(['data-key', data.key]);
-  return out;
-};
-
-function textNode(p: Omit<TextPrim, 'kind' | 'data' | 'role'> & { cls: string }, data: DataAttrs): SvgNode {
-  const attrs: Array<[string, string]> = [
-    ['id', p.id],
-    ['class', p.cls],
-    ['x', num(p.x)],
-    ['y', num(p.y)],
-    ['font-size', num(p.size)],
-    ['fill', p.color],
-  ];
-  if (p.anchor !== 'start') attrs.push(['text-anchor', p.anchor]);
-  if (p.bold) attrs.push(['font-weight', 'bold']);
-  return { tag: 'text', attrs: [...attrs, ...dataAttrs(data)], text: p.text };
+function dataAttrs(sink: SvgSink, data: DataAttrs): void {
+  if (data.unit !== undefined) sink.attr('data-unit', data.unit);
+  if (data.row !== undefined) sink.attr('data-row', data.row);
+  if (data.pass !== undefined) sink.attr('data-pass', data.pass);
+  if (data.kind !== undefined) sink.attr('data-kind', data.kind);
+  if (data.key !== undefined) sink.attr('data-key', data.key);
 }
 
-function bead(p: BeadPrim): SvgNode[] {
-  const attrs: Array<[string, string]> = [
-    ['id', p.id],
-    ['class', p.gap ? 'ff-bead ff-gap' : 'ff-bead'],
-    ['x', num(round2(p.x - p.length / 2))],
-    ['y', num(round2(p.y - p.thickness / 2))],
-    ['width', num(p.length)],
-    ['height', num(p.thickness)],
-    ['rx', num(Math.min(p.thickness, p.length) / 2)],
-  ];
-  if (p.angle !== 0) attrs.push(['transform', `rotate(${num(p.angle)} ${num(p.x)} ${num(p.y)})`]);
-  attrs.push(['fill', p.fill], ['stroke', p.stroke], ['stroke-width', num(p.strokeWidth)]);
-  attrs.push(['data-bead', num(p.bead)], ['data-unit', num(p.unit)], ['data-row', num(p.row)]);
-  const nodes: SvgNode[] = [{ tag: 'rect', attrs }];
+type TextFields = Pick<TextPrim, 'id' | 'x' | 'y' | 'size' | 'text' | 'color' | 'anchor' | 'bold'>;
+
+function text(sink: SvgSink, p: TextFields, cls: string, data: DataAttrs | null): void {
+  sink.open('text');
+  sink.attr('id', p.id);
+  sink.attr('class', cls);
+  sink.attr('x', p.x);
+  sink.attr('y', p.y);
+  sink.attr('font-size', p.size);
+  sink.attr('fill', p.color);
+  if (p.anchor !== 'start') sink.attr('text-anchor', p.anchor);
+  if (p.bold) sink.attr('font-weight', 'bold');
+  if (data) dataAttrs(sink, data);
+  sink.text(p.text);
+  sink.close('text');
+}
+
+function bead(sink: SvgSink, p: BeadPrim): void {
+  sink.open('rect');
+  sink.attr('id', p.id);
+  sink.attr('class', p.gap ? 'ff-bead ff-gap' : 'ff-bead');
+  sink.attr('x', round2(p.x - p.length / 2));
+  sink.attr('y', round2(p.y - p.thickness / 2));
+  sink.attr('width', p.length);
+  sink.attr('height', p.thickness);
+  sink.attr('rx', round2(Math.min(p.thickness, p.length) / 2));
+  if (p.angle !== 0) sink.attr('transform', `rotate(${p.angle} ${p.x} ${p.y})`);
+  sink.attr('fill', p.fill);
+  sink.attr('stroke', p.stroke);
+  sink.attr('stroke-width', p.strokeWidth);
+  sink.attr('data-bead', p.bead);
+  sink.attr('data-unit', p.unit);
+  sink.attr('data-row', p.row);
+  sink.close('rect');
   if (p.label) {
-    const { text, color, size, x, y } = p.label;
-    nodes.push(textNode({ id: `${p.id}-key`, cls: 'ff-bead-label', x, y, size, text, color, anchor: 'middle', bold: true }, {}));
+    const { label } = p;
+    text(sink, { id: `${p.id}-key`, x: label.x, y: label.y, size: label.size, text: label.text, color: label.color, anchor: 'middle', bold: true }, 'ff-bead-label', null);
   }
-  return nodes;
 }
 
-const strokeAttrs = (stroke: string | null, width: number): Array<[string, string]> =>
-  stroke === null ? [] : [['stroke', stroke], ['stroke-width', num(width)]];
-
-function rect(p: RectPrim): SvgNode {
-  const fill = typeof p.fill === 'string' ? p.fill : `url(#${p.fill.pattern})`;
-  const attrs: Array<[string, string]> = [
-    ['id', p.id],
-    ['class', `ff-${p.role}`],
-    ['x', num(p.x)],
-    ['y', num(p.y)],
-    ['width', num(p.width)],
-    ['height', num(p.height)],
-    ['fill', fill],
-    ...strokeAttrs(p.stroke, p.strokeWidth),
-  ];
-  return { tag: 'rect', attrs: [...attrs, ...dataAttrs(p.data)] };
+function stroke(sink: SvgSink, color: string | null, width: number): void {
+  if (color === null) return;
+  sink.attr('stroke', color);
+  sink.attr('stroke-width', width);
 }
 
-function path(p: PathPrim): SvgNode {
-  const attrs: Array<[string, string]> = [['id', p.id], ['class', `ff-${p.role}`], ['d', p.d], ['fill', p.fill ?? 'none'], ...strokeAttrs(p.stroke, p.strokeWidth)];
-  if (p.dash !== undefined) attrs.push(['stroke-dasharray', p.dash]);
-  if (p.stroke !== null && p.fill === null) attrs.push(['stroke-linecap', 'round']);
-  return { tag: 'path', attrs: [...attrs, ...dataAttrs(p.data)] };
+function rect(sink: SvgSink, p: RectPrim): void {
+  sink.open('rect');
+  sink.attr('id', p.id);
+  sink.attr('class', `ff-${p.role}`);
+  sink.attr('x', p.x);
+  sink.attr('y', p.y);
+  sink.attr('width', p.width);
+  sink.attr('height', p.height);
+  sink.attr('fill', typeof p.fill === 'string' ? p.fill : `url(#${p.fill.pattern})`);
+  stroke(sink, p.stroke, p.strokeWidth);
+  dataAttrs(sink, p.data);
+  sink.close('rect');
 }
 
-function primitive(p: Primitive): SvgNode[] {
+function path(sink: SvgSink, p: PathPrim): void {
+  sink.open('path');
+  sink.attr('id', p.id);
+  sink.attr('class', `ff-${p.role}`);
+  sink.attr('d', p.d);
+  sink.attr('fill', p.fill ?? 'none');
+  stroke(sink, p.stroke, p.strokeWidth);
+  if (p.dash !== undefined) sink.attr('stroke-dasharray', p.dash);
+  if (p.stroke !== null && p.fill === null) sink.attr('stroke-linecap', 'round');
+  dataAttrs(sink, p.data);
+  sink.close('path');
+}
+
+function primitive(sink: SvgSink, p: Primitive): void {
   switch (p.kind) {
     case 'bead':
-      return bead(p);
+      return bead(sink, p);
     case 'text':
-      return [textNode({ ...p, cls: `ff-${p.role}` }, p.data)];
+      return text(sink, p, `ff-${p.role}`, p.data);
     case 'rect':
-      return [rect(p)];
+      return rect(sink, p);
     case 'path':
-      return [path(p)];
+      return path(sink, p);
   }
 }
 
-const pattern = (h: HatchPattern): SvgNode => ({
-  tag: 'pattern',
-  attrs: [
-    ['id', h.id],
-    ['patternUnits', 'userSpaceOnUse'],
-    ['width', num(h.size)],
-    ['height', num(h.size)],
-  ],
-  children: [{ tag: 'path', attrs: [['d', h.d], ['fill', 'none'], ['stroke', h.stroke], ['stroke-width', num(h.strokeWidth)]] }],
-});
-
-/** Root attributes of the chart's `<svg>`, for emitters that create the root themselves. */
-export function rootAttrs(scene: Scene): Array<[string, string]> {
-  return [
-    ['viewBox', `0 0 ${num(scene.width)} ${num(scene.height)}`],
-    ['width', `${num(scene.width)}mm`],
-    ['height', `${num(scene.height)}mm`],
-    ['font-family', scene.fontFamily],
-    ['role', 'img'],
-    ['aria-labelledby', 'ff-chart-title ff-chart-desc'],
-    ['data-theme', scene.theme],
-  ];
+function pattern(sink: SvgSink, h: HatchPattern): void {
+  sink.open('pattern');
+  sink.attr('id', h.id);
+  sink.attr('patternUnits', 'userSpaceOnUse');
+  sink.attr('width', h.size);
+  sink.attr('height', h.size);
+  sink.open('path');
+  sink.attr('d', h.d);
+  sink.attr('fill', 'none');
+  sink.attr('stroke', h.stroke);
+  sink.attr('stroke-width', h.strokeWidth);
+  sink.close('path');
+  sink.close('pattern');
 }
+
+/** Attributes of the chart's `<svg>` root, for emitters that create the root themselves. */
+export function rootAttrs(sink: Pick<SvgSink, 'attr'>, scene: Scene): void {
+  sink.attr('viewBox', `0 0 ${scene.width} ${scene.height}`);
+  sink.attr('width', `${scene.width}mm`);
+  sink.attr('height', `${scene.height}mm`);
+  sink.attr('font-family', scene.fontFamily);
+  sink.attr('role', 'img');
+  sink.attr('aria-labelledby', 'ff-chart-title ff-chart-desc');
+  sink.attr('data-theme', scene.theme);
+}
+
+const plain = (sink: SvgSink, tag: string, id: string | null, content: string): void => {
+  sink.open(tag);
+  if (id !== null) sink.attr('id', id);
+  sink.text(content);
+  sink.close(tag);
+};
 
 /** The children of the root, in document order. */
-export function sceneChildren(scene: Scene, fonts: readonly EmbeddedFont[] = []): SvgNode[] {
-  const nodes: SvgNode[] = [
-    { tag: 'title', attrs: [['id', 'ff-chart-title']], text: scene.title },
-    { tag: 'desc', attrs: [['id', 'ff-chart-desc']], text: scene.desc },
-  ];
+export function sceneChildren(sink: SvgSink, scene: Scene, fonts: readonly EmbeddedFont[] = []): void {
+  plain(sink, 'title', 'ff-chart-title', scene.title);
+  plain(sink, 'desc', 'ff-chart-desc', scene.desc);
   if (fonts.length > 0) {
     const css = fonts.map((f) => `@font-face{font-family:'${f.family}';font-weight:${f.weight};src:url(data:font/ttf;base64,${f.base64}) format('truetype');}`);
-    nodes.push({ tag: 'style', attrs: [], text: css.join('\n') });
+    plain(sink, 'style', null, css.join('\n'));
   }
-  if (scene.patterns.length > 0) nodes.push({ tag: 'defs', attrs: [], children: scene.patterns.map(pattern) });
-  for (const item of scene.items) nodes.push(...primitive(item));
-  return nodes;
+  if (scene.patterns.length > 0) {
+    sink.open('defs');
+    for (const h of scene.patterns) pattern(sink, h);
+    sink.close('defs');
+  }
+  for (const item of scene.items) primitive(sink, item);
 }

@@ -26,16 +26,26 @@ export const toPage = (t: PageTransform, p: Point): Point => ({
   y: t.top + (t.maxY - p.y) * t.scale,
 });
 
-export const pointPath = (points: readonly Point[], closed: boolean): string =>
-  points.map((p, i) => `${i === 0 ? 'M' : 'L'}${round2(p.x)} ${round2(p.y)}`).join(' ') + (closed ? ' Z' : '');
+export function pointPath(points: readonly Point[], closed: boolean): string {
+  let d = '';
+  for (let i = 0; i < points.length; i++) d += `${i === 0 ? 'M' : ' L'}${round2(points[i]!.x)} ${round2(points[i]!.y)}`;
+  return closed ? `${d} Z` : d;
+}
 
-const cornerPlaces = (corner: Corner): [Place, Place] => corner.split('|') as [Place, Place];
+const CORNER_PLACES: Record<Corner, [Place, Place]> = {
+  'base|far': ['base', 'far'],
+  'far|top': ['far', 'top'],
+  'top|near': ['top', 'near'],
+  'near|base': ['near', 'base'],
+};
 
 export const corners: readonly Corner[] = ['base|far', 'far|top', 'top|near', 'near|base'];
 
 /** The junction where the unit's beads at the corner's two places meet, if both are there. */
 export function cornerJunction(model: Model, unit: Unit, corner: Corner): number | null {
-  const [a, b] = cornerPlaces(corner).map((place) => unit.places[place]);
+  const [pa, pb] = CORNER_PLACES[corner];
+  const a = unit.places[pa];
+  const b = unit.places[pb];
   if (a === null || a === undefined || b === null || b === undefined) return null;
   const ja = model.beads[a]?.junctions;
   const jb = model.beads[b]?.junctions;
@@ -51,8 +61,8 @@ export function cornerJunction(model: Model, unit: Unit, corner: Corner): number
  * the unrolled chart to its far bead at the seam.
  */
 export function cellOutline(model: Model, unit: Unit): Point[] {
-  const found = corners.map((c) => cornerJunction(model, unit, c));
-  if (model.layout.kind === 'round' && found.every((j) => j !== null)) {
+  const found = model.layout.kind === 'round' ? corners.map((c) => cornerJunction(model, unit, c)) : [];
+  if (found.length > 0 && found.every((j) => j !== null)) {
     return found.map((j) => {
       const junction = model.junctions[j as number]!;
       return { x: junction.x, y: junction.y };

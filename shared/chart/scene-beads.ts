@@ -3,7 +3,7 @@
  * arrowheads, failed-unit marks and unit numbers.
  */
 import type { Model, Unit, UnitStep } from '../model.js';
-import { labelColor } from './contrast.js';
+import { labelColors } from './contrast.js';
 import { arrowhead, cellOutline, cornerJunction, nearImage, pointPath, round2, toPage, unitVector, type PageTransform } from './geometry.js';
 import type { BeadPrim, PathPrim, TextPrim } from './scene-types.js';
 import type { Theme } from './themes.js';
@@ -29,6 +29,7 @@ export function cells(model: Model, t: PageTransform, theme: Theme): PathPrim[] 
 
 export function beads(model: Model, t: PageTransform, theme: Theme): BeadPrim[] {
   const hex = new Map(model.palette.map((p) => [p.key, p.hex]));
+  const ink = labelColors([...hex.values(), '#808080']);
   const thickness = round2(BEAD_THICKNESS * t.scale);
   return model.beads.map((bead) => {
     const fill = hex.get(bead.color) ?? '#808080';
@@ -55,7 +56,7 @@ export function beads(model: Model, t: PageTransform, theme: Theme): BeadPrim[] 
     };
     // A letter needs about one em along the bead; gap beads are often shorter.
     if (length >= thickness * 1.3) {
-      prim.label = { text: bead.color, color: labelColor(fill), size, x: prim.x, y: round2(centre.y + (size * CAP_HEIGHT) / 2) };
+      prim.label = { text: bead.color, color: ink.get(fill)!, size, x: prim.x, y: round2(centre.y + (size * CAP_HEIGHT) / 2) };
     }
     return prim;
   });

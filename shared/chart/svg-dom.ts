@@ -5,7 +5,7 @@
  * checks that on svgdom. The DOM comes from the container the caller passes.
  */
 import { SVG, type Dom, type Svg } from '@svgdotjs/svg.js';
-import { rootAttrs, sceneChildren, type EmbeddedFont, type SvgNode } from './elements.js';
+import { formatNumber, rootAttrs, sceneChildren, type EmbeddedFont, type SvgSink } from './elements.js';
 import type { Scene } from './scene-types.js';
 
 /** Added to every element of the highlighted unit (its cell, beads, cue and number). */
@@ -22,19 +22,25 @@ export interface ChartHandle {
   remove(): void;
 }
 
-function draw(parent: Svg | Dom, node: SvgNode): void {
-  const el = parent.element(node.tag);
-  for (const [name, value] of node.attrs) el.attr(name, value);
-  if (node.text !== undefined) el.words(node.text);
-  for (const child of node.children ?? []) draw(el, child);
+/** Builds the walk as svg.js elements under the root, in the same order and with the same attributes. */
+function domSink(root: Svg): SvgSink {
+  const stack: Array<Svg | Dom> = [root];
+  const top = (): Svg | Dom => stack[stack.length - 1]!;
+  return {
+    open: (tag) => void stack.push(top().element(tag)),
+    attr: (name, value) => void top().attr(name, typeof value === 'number' ? formatNumber(value) : value),
+    text: (text) => void top().words(text),
+    close: () => void stack.pop(),
+  };
 }
 
 export function drawScene(scene: Scene, container: Parameters<Svg['addTo']>[0], fonts: readonly EmbeddedFont[] = []): ChartHandle {
   const svg = SVG().addTo(container);
   // svg.js declares its own namespaces on a new root; the chart uses none of them.
   svg.attr('xmlns:svgjs', null).attr('xmlns:xlink', null).attr('version', null);
-  for (const [name, value] of rootAttrs(scene)) svg.attr(name, value);
-  for (const node of sceneChildren(scene, fonts)) draw(svg, node);
+  const sink = domSink(svg);
+  rootAttrs(sink, scene);
+  sceneChildren(sink, scene, fonts);
 
   const query = (selector: string): Dom[] => svg.find(selector).map((el) => el as Dom);
   let highlighted: number | null = null;

@@ -1,34 +1,66 @@
 /**
  * Scene to SVG text, for the CLI, batch conversion and the server's
- * downloads. String building only: fast, and byte-identical for the same
+ * downloads. Plain string building: fast, and byte-identical for the same
  * scene and font.
  */
-import { rootAttrs, sceneChildren, type EmbeddedFont, type SvgNode } from './elements.js';
+import { formatNumber, rootAttrs, sceneChildren, type EmbeddedFont, type SvgSink } from './elements.js';
 import type { Scene } from './scene-types.js';
 
 export type { EmbeddedFont } from './elements.js';
 
-const escapeText = (s: string): string => s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;');
-const escapeAttr = (s: string): string => escapeText(s).replace(/"/g, '&quot;');
+const SPECIAL = /[&<>"]/;
+const escape = (s: string): string =>
+  SPECIAL.test(s) ? s.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;') : s;
 
-function write(node: SvgNode, out: string[]): void {
-  out.push('<', node.tag);
-  for (const [name, value] of node.attrs) out.push(' ', name, '="', escapeAttr(value), '"');
-  if (node.text === undefined && node.children === undefined) {
-    out.push('/>\n');
-    return;
+/**
+ * Collects the walk as text; an element left open with no content closes as
+ * `<tag/>`. Pieces go into arrays joined once per element and once at the
+ * end: appending them to one growing string makes a rope of hundreds of
+ * thousands of nodes, and collecting those costs more than all the rest.
+ */
+class TextSink implements SvgSink {
+  private readonly chunks: string[] = ['<?xml version="1.0" encoding="UTF-8"?>\n'];
+  private readonly element: string[] = [];
+  /** The last opened tag still lacks its '>'. */
+  private pending = false;
+
+  private flush(end: string): void {
+    this.element.push(end);
+    this.chunks.push(this.element.join(''));
+    this.element.length = 0;
+    this.pending = false;
   }
-  out.push('>');
-  if (node.text !== undefined) out.push(escapeText(node.text));
-  if (node.children) {
-    out.push('\n');
-    for (const child of node.children) write(child, out);
+
+  open(tag: string): void {
+    if (this.pending) this.flush('>\n');
+    this.element.push('<', tag);
+    this.pending = true;
   }
-  out.push('</', node.tag, '>\n');
+
+  attr(name: string, value: string | number): void {
+    this.element.push(' ', name, '="', typeof value === 'number' ? formatNumber(value) : escape(value), '"');
+  }
+
+  text(text: string): void {
+    this.element.push('>', escape(text));
+    this.pending = false;
+  }
+
+  close(tag: string): void {
+    this.flush(this.pending ? '/>\n' : `</${tag}>\n`);
+  }
+
+  result(): string {
+    return this.chunks.join('');
+  }
 }
 
 export function sceneToSvg(scene: Scene, fonts: readonly EmbeddedFont[] = []): string {
-  const out: string[] = ['<?xml version="1.0" encoding="UTF-8"?>\n'];
-  write({ tag: 'svg', attrs: [['xmlns', 'http://www.w3.org/2000/svg'], ...rootAttrs(scene)], children: sceneChildren(scene, fonts) }, out);
-  return out.join('');
+  const sink = new TextSink();
+  sink.open('svg');
+  sink.attr('xmlns', 'http://www.w3.org/2000/svg');
+  rootAttrs(sink, scene);
+  sceneChildren(sink, scene, fonts);
+  sink.close('svg');
+  return sink.result();
 }
