@@ -28,6 +28,8 @@ export const GAP_BEAD_LENGTH = 0.35;
 const TAU = 2 * Math.PI;
 const deg = (rad: number): number => (((rad * 180) / Math.PI) % 360 + 360) % 360;
 const ccw = (a: number, b: number): number => (((b - a) % TAU) + TAU) % TAU;
+/** The angle midway between two, along the shorter way round (a bead spans less than half a ring). */
+const between = (a: number, b: number): number => (ccw(a, b) <= Math.PI ? a + ccw(a, b) / 2 : b + ccw(b, a) / 2);
 
 function blank(w: Weave): Geometry {
   const J = w.junctionCount;
@@ -92,7 +94,7 @@ function unitAngles(w: Weave, ids: readonly number[], ja: readonly number[], k: 
     const b = u.beads[BASE]!;
     const a = w.beadEnds[2 * b]!;
     const z = w.beadEnds[2 * b + 1]!;
-    if (b >= 0 && a !== z && !Number.isNaN(ja[a]!) && !Number.isNaN(ja[z]!)) theta[i] = ja[a]! + ccw(ja[a]!, ja[z]!) / 2;
+    if (b >= 0 && a !== z && !Number.isNaN(ja[a]!) && !Number.isNaN(ja[z]!)) theta[i] = between(ja[a]!, ja[z]!);
   });
   const based = theta.map((t, i) => (Number.isNaN(t) ? -1 : i)).filter((i) => i >= 0);
   if (based.length === 0) return theta.map((_, i) => (TAU * (i + 0.5)) / n);
@@ -135,10 +137,12 @@ function roundLayout(w: Weave, g: Geometry): void {
       if (u.failed) return;
       const lo = k + r0;
       const hi = k + 1 + r0;
-      set(u.corners[3]!, k === 0 ? (TAU * i) / n : (prev + t) / 2, lo);
-      set(u.corners[0]!, k === 0 ? (TAU * (i + 1)) / n : (t + next) / 2, lo);
-      set(u.corners[1]!, k === 0 ? (TAU * (i + 1)) / n : (t + next) / 2, hi);
-      set(u.corners[2]!, k === 0 ? (TAU * i) / n : (prev + t) / 2, hi);
+      const after = k === 0 ? (TAU * (i + 1)) / n : t + ccw(t, next) / 2;
+      const before = k === 0 ? (TAU * i) / n : prev + ccw(prev, t) / 2;
+      set(u.corners[3]!, before, lo);
+      set(u.corners[0]!, after, lo);
+      set(u.corners[1]!, after, hi);
+      set(u.corners[2]!, before, hi);
     });
   });
   for (let j = 0; j < w.junctionCount; j++) {
