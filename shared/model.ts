@@ -87,6 +87,7 @@ export type PassKind = 'pickup' | 'close' | 'position';
 
 export interface ThreadPass {
   bead: number;
+  /** The unit the pass belongs to; a `position` pass belongs to the unit the thread is leaving (its `moveOn`). */
   unit: number;
   kind: PassKind;
   /** The junction the thread enters the bead at and leaves it by. */
@@ -100,6 +101,7 @@ export interface StepAction {
   place: Place;
 }
 
+/** One per unit, so `steps[unit.id]` is that unit's step; a failed unit's step has no actions. */
 export interface UnitStep {
   unit: number;
   direction: Direction;
@@ -110,7 +112,7 @@ export interface UnitStep {
   cue: boolean;
   /** Going round: pick-ups and passes in thread order. */
   actions: StepAction[];
-  /** Beads passed through to reach the next unit's start corner (empty for the last). */
+  /** Beads passed through to reach the next unit's start corner (empty for the last, and where the thread is already there). */
   moveOn: number[];
 }
 
@@ -129,10 +131,11 @@ export interface RowInfo {
 
 export interface LayoutInfo {
   kind: Layout;
-  /** Bounding box of all junctions, in unit sides. */
+  /** Bounding box of all junctions, in unit sides (a tube reaches to x = circumference). */
   bounds: { minX: number; minY: number; maxX: number; maxY: number };
-  /** Tube: x of the seam line on the unrolled chart. Round: radius of the centre opening. */
+  /** Tube: x of the seam line on the unrolled chart (0; x = circumference is the same line). */
   seamX?: number;
+  /** Round: radius of the centre opening, in unit sides. */
   centerRadius?: number;
   /** Bead size for this pattern (outside diameter, length along the hole), in mm. */
   beadMm: { diameter: number; length: number };

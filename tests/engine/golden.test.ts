@@ -54,3 +54,8 @@ describe('schema', () => {
     expect(valid(broken as Model)).not.toEqual([]);
   });
 });
+
+test('a model of a pattern the parser had to recover from still validates', () => {
+  // Row numbers are kept as written (here the parser recovered a row without one), so they may be 0.
+  expect(valid(compile('\u0000 row row ((((\nrow 2: AAAA').value.model)).toEqual([]);
+});
