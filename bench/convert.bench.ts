@@ -1,0 +1,80 @@
+/**
+ * Batch conversion of 1,000 small generated patterns to all four formats:
+ * `--jobs 2` against `--jobs 1` (goal: at least 1.7x faster on 2 cores), and
+ * the default (all cores) against a baseline that only reads each pattern
+ * and writes files of the sizes its outputs have (goal: at most 5x). Worker
+ * threads start cold in every run, as they do for a user.
+ */
+import { mkdir, mkdtemp, readFile, readdir, rm, stat, writeFile } from 'node:fs/promises';
+import { availableParallelism, tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { performance } from 'node:perf_hooks';
+import { convertPaths } from '../bin/convert/index.js';
+import type { Bench } from './harness.js';
+
+const FILES = 1000;
+const HEX = ['#2e6f8e', '#f4f1ea', '#c98b2b', '#6b2d5c', '#8fa683', '#1b1b1f'];
+
+/** A flat panel of 3-6 units by 3-8 rows in two or three colours, different for each i. */
+export function smallPattern(i: number): string {
+  const units = 3 + (i % 4);
+  const rows = 3 + (i % 6);
+  const keys = i % 3 === 0 ? 'ABC' : 'AB';
+  const colors = [...keys].map((k, j) => `  ${k} ${HEX[(i + j) % HEX.length]} shade ${j + 1}`);
+  const pick = (n: number, r: number) => Array.from({ length: n }, (_, j) => keys[(i + r + j) % keys.length]).join('');
+  const lines = [`title: Sample ${i}`, 'designer: Orla Fenwick', 'colors:', ...colors];
+  lines.push(`row 1: ${pick(4, 0)} ${Array.from({ length: units - 1 }, (_, u) => pick(3, u)).join(' ')}`);
+  for (let r = 2; r <= rows; r++) lines.push(`row ${r}: ${pick(3, r)} ${Array.from({ length: units - 1 }, (_, u) => pick(2, r + u)).join(' ')}`);
+  return `${lines.join('\n')}\n`;
+}
+
+async function timed(fn: () => Promise<unknown>): Promise<number> {
+  const t0 = performance.now();
+  await fn();
+  return performance.now() - t0;
+}
+
+async function convertOnce(root: string, jobs: number): Promise<void> {
+  const summary = await convertPaths(['in'], { out: 'out', cwd: root, jobs, force: true });
+  if (summary.converted !== FILES) throw new Error(`converted ${summary.converted} of ${FILES}: ${summary.files.find((f) => f.message)?.message}`);
+}
+
+const bench: Bench = {
+  name: 'convert',
+  async run() {
+    const root = await mkdtemp(join(tmpdir(), 'fourfold-bench-'));
+    try {
+      await mkdir(join(root, 'in'));
+      for (let i = 0; i < FILES; i++) await writeFile(join(root, 'in', `p${String(i).padStart(4, '0')}.ffp`), smallPattern(i));
+      // Warm this thread's modules, which --jobs 1 uses; workers start cold either way.
+      await convertPaths(['in/p0000.ffp'], { out: 'warm', cwd: root, jobs: 1, force: true });
+
+      const one = await timed(() => convertOnce(root, 1));
+      const two = await timed(() => convertOnce(root, 2));
+      const all = availableParallelism() === 2 ? two : await timed(() => convertOnce(root, availableParallelism()));
+
+      const outputs = (await readdir(join(root, 'out'))).filter((f) => !f.endsWith('.hash'));
+      const sizes = await Promise.all(outputs.map(async (f) => (await stat(join(root, 'out', f))).size));
+      const inputs = (await readdir(join(root, 'in'))).sort();
+      const perInput = Math.ceil(outputs.length / inputs.length);
+      const baseline = await timed(async () => {
+        await mkdir(join(root, 'plain'), { recursive: true });
+        for (let i = 0; i < inputs.length; i++) {
+          await readFile(join(root, 'in', inputs[i]!));
+          for (let k = 0; k < perInput; k++) {
+            const size = sizes[i * perInput + k];
+            if (size !== undefined) await writeFile(join(root, 'plain', `${i}-${k}`), Buffer.alloc(size, 32));
+          }
+        }
+      });
+      return [
+        { name: `convert ${FILES} patterns (svg,png,md,json): --jobs 1 vs --jobs 2 (speed-up)`, value: one, baseline: two, unit: 'ms', goal: { atLeast: 1.7 } },
+        { name: `convert ${FILES} patterns, all ${availableParallelism()} cores, vs reading each and writing files of its outputs' sizes`, value: all, baseline, unit: 'ms', goal: { atMost: 5 } },
+      ];
+    } finally {
+      await rm(root, { recursive: true, force: true });
+    }
+  },
+};
+
+export default bench;
