@@ -86,13 +86,3 @@ export class LineIndex {
 
 const isHigh = (c: number): boolean => c >= 0xd800 && c <= 0xdbff;
 const isLow = (c: number): boolean => c >= 0xdc00 && c <= 0xdfff;
-
-/** A range that spans from the start of `a` to the end of `b`. */
-export const span = (a: SourceRange, b: SourceRange): SourceRange => ({
-  line: a.line,
-  column: a.column,
-  endLine: b.endLine,
-  endColumn: b.endColumn,
-  offset: a.offset,
-  endOffset: b.endOffset,
-});

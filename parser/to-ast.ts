@@ -8,7 +8,7 @@ import type { CstElement, CstNode, IToken } from 'chevrotain';
 import type { Diagnostic, Result, SourceRange } from '../shared/diagnostic.js';
 import type { ColorDef, Comment, GroupNode, HeaderEntry, ItemNode, NoteNode, PatternAst, RowNode } from './ast.js';
 import { parser } from './grammar.js';
-import { span, type LineIndex } from './positions.js';
+import type { LineIndex } from './positions.js';
 import { didYouMean } from './suggest.js';
 import { badColor, colorHex, COLORS_KEYS, HEADER_KEYS, NOTE_KEY, readHeader, ROW_WORDS } from './values.js';
 
@@ -49,6 +49,7 @@ const BaseVisitor = parser.getBaseCstVisitorConstructor();
 
 class AstBuilder extends BaseVisitor {
   readonly diagnostics: Diagnostic[] = [];
+  private readonly keyStrings = new Map<number, string>();
 
   constructor(private readonly ix: LineIndex) {
     super();
@@ -102,30 +103,25 @@ class AstBuilder extends BaseVisitor {
   rowLine(ctx: Children): Line | undefined {
     const start = tokens(ctx, 'RowStart')[0];
     if (!real(start)) return undefined;
-    const startRange = this.range(start);
     const w = start.image.toLowerCase();
     if (!(ROW_WORDS as readonly string[]).includes(w)) {
-      this.error(startRange, `'${start.image}' is not a word the notation knows.${didYouMean(w, ROW_WORDS)}`, "a row starts with 'row N:' or 'round N:'");
+      this.error(this.range(start), `'${start.image}' is not a word the notation knows.${didYouMean(w, ROW_WORDS)}`, "a row starts with 'row N:' or 'round N:'");
     }
     const [n1, n2] = tokens(ctx, 'RowNumber').filter(real);
     const colon = tokens(ctx, 'Colon').find(real);
     let last = n2 ?? n1 ?? start;
-    const label = `${start.image}${n1 ? ` ${n1.image}${n2 ? `-${n2.image}` : ''}` : ''}`;
+    const label = (): string => `${start.image}${n1 ? ` ${n1.image}${n2 ? `-${n2.image}` : ''}` : ''}`;
     if (!n1) this.error(this.ix.range(endOf(start), endOf(start)), `expected a row number after '${start.image}'`, "write it like 'row 3: AB CB'");
-    if (!colon) this.error(this.ix.range(endOf(last), endOf(last)), `expected ':' after '${label}'`, `write '${label}: ' before the units`);
+    if (!colon) this.error(this.ix.range(endOf(last), endOf(last)), `expected ':' after '${label()}'`, `write '${label()}: ' before the units`);
     if (colon) last = colon;
-    const items: ItemNode[] = [];
-    for (const body of nodes(ctx, 'body')) items.push(...(this.visit(body) as ItemNode[]));
-    for (const stray of tokens(ctx, 'RParen').filter(real)) {
-      this.error(this.range(stray), "this ')' closes no group", "open the group with '(' before its units, like '(AB CB)x2'");
-    }
-    const numberRange = n1 ? span(this.range(n1), this.range(n2 ?? n1)) : this.ix.range(endOf(start), endOf(start));
+    const items = this.items(ctx, true);
+    const numberRange = n1 ? this.ix.range(n1.startOffset, endOf(n2 ?? n1)) : this.ix.range(endOf(start), endOf(start));
     const lastItem = items[items.length - 1];
-    const endRange = lastItem && lastItem.range.endOffset > endOf(last) ? lastItem.range : this.range(last);
+    const end = Math.max(lastItem ? lastItem.range.endOffset : 0, endOf(last));
     if (items.length === 0) {
       this.error(
         this.ix.range(endOf(last), endOf(last)),
-        `expected a colour key (A-Z), a group '(' or a skip '-' after '${label}:'`,
+        `expected a colour key (A-Z), a group '(' or a skip '-' after '${label()}:'`,
         "a row lists its units, like 'row 2: *AAAA BA +AAA'",
       );
     }
@@ -137,24 +133,30 @@ class AstBuilder extends BaseVisitor {
       to: n2 ? Number(n2.image) : from,
       items,
       notes: [],
-      range: span(startRange, endRange),
+      range: this.ix.range(start.startOffset, end),
       numberRange,
       leadingComments: [],
     };
     return { kind: 'row', row, end: real(lineEnd) ? lineEnd.startOffset : row.range.endOffset };
   }
 
-  body(ctx: Children): ItemNode[] {
+  /** The unit list of a row or group, in source order; a row's stray ')' is reported in place. */
+  private items(ctx: Children, row: boolean): ItemNode[] {
     const toks = tokens(ctx, 'BodyToken');
     const groups = nodes(ctx, 'group');
+    const strays = row ? tokens(ctx, 'RParen') : [];
     const items: ItemNode[] = [];
-    const ordered = groups.length === 0 ? toks : mergeByOffset<IToken | CstNode>(toks, groups);
+    let ordered: (IToken | CstNode)[] = groups.length === 0 ? toks : mergeByOffset<IToken | CstNode>(toks, groups);
+    if (strays.length > 0) ordered = mergeByOffset(ordered, strays);
     for (const el of ordered) {
       if (!('image' in el)) {
         const group = this.visit(el) as GroupNode | undefined;
         if (group) items.push(group);
-      } else if (real(el) && el.tokenType.name === 'Units') this.units(el, items);
-      else {
+      } else if (!real(el)) continue;
+      else if (el.tokenType.name === 'Units') this.units(el, items);
+      else if (el.tokenType.name === 'RParen') {
+        this.error(this.range(el), "this ')' closes no group", "open the group with '(' before its units, like '(AB CB)x2'");
+      } else {
         const item = this.bodyToken(el);
         if (item) items.push(item);
       }
@@ -181,7 +183,7 @@ class AstBuilder extends BaseVisitor {
       for (let c = image.charCodeAt(k); k < n && c !== 32 && c !== 9; c = image.charCodeAt(++k)) if (c >= 97) lower = true;
       const offset = t.startOffset + from;
       const range: SourceRange = { line, column: column + from, endLine: line, endColumn: column + k, offset, endOffset: t.startOffset + k };
-      const written = image.slice(from + mark.length, k);
+      const written = this.keysOf(image, from + mark.length, k);
       while (k < n && (image.charCodeAt(k) === 32 || image.charCodeAt(k) === 9)) k++;
       if (written === '') {
         this.error(range, `'${mark}' needs its colour keys right after it`, `write the unit's keys with no space: '${mark}CCB'`);
@@ -202,6 +204,23 @@ class AstBuilder extends BaseVisitor {
       }
       out.push({ type: 'unit', mark, keys, range });
     }
+  }
+
+  /**
+   * The keys of a unit as a string, shared between units with the same keys:
+   * a large pattern repeats a few key strings many thousands of times, and
+   * looking them up by a number made from the letters allocates nothing.
+   */
+  private keysOf(image: string, from: number, to: number): string {
+    if (to - from > 4) return image.slice(from, to);
+    let code = 0;
+    for (let i = from; i < to; i++) code = code * 128 + image.charCodeAt(i);
+    let keys = this.keyStrings.get(code);
+    if (keys === undefined) {
+      keys = image.slice(from, to);
+      this.keyStrings.set(code, keys);
+    }
+    return keys;
   }
 
   private bodyToken(t: IToken): ItemNode | undefined {
@@ -225,7 +244,7 @@ class AstBuilder extends BaseVisitor {
   group(ctx: Children): GroupNode | undefined {
     const open = tokens(ctx, 'LParen')[0];
     if (!real(open)) return undefined;
-    const items = nodes(ctx, 'body').flatMap((b) => this.visit(b) as ItemNode[]);
+    const items = this.items(ctx, false);
     const close = tokens(ctx, 'RParen').find(real);
     const times = tokens(ctx, 'Times').find(real);
     const openRange = this.range(open);
@@ -239,7 +258,8 @@ class AstBuilder extends BaseVisitor {
     if (items.length === 0) this.error(openRange, 'this group is empty', "put the units to repeat inside: '(AB CB)x2'");
     const endTok = times ?? close;
     const lastItem = items[items.length - 1];
-    const range = endTok ? span(openRange, this.range(endTok)) : lastItem ? span(openRange, lastItem.range) : openRange;
+    const end = endTok ? endOf(endTok) : lastItem ? lastItem.range.endOffset : endOf(open);
+    const range = this.ix.range(open.startOffset, end);
     return { type: 'group', items, times: count, range };
   }
 }
