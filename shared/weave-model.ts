@@ -3,7 +3,7 @@
  * (weave.ts), the thread (thread.ts) and the geometry (layout.ts). Bead ids
  * become pick-up ranks here, so a bead's id says when the thread added it.
  */
-import { sortDiagnostics, type Diagnostic, type Result, type SourceRange } from './diagnostic.js';
+import { fileStart, sortDiagnostics, type Diagnostic, type Result, type SourceRange } from './diagnostic.js';
 import type { PatternAst } from '../parser/ast.js';
 import type { Bead, LayoutInfo, Model, Place, RowInfo, ThreadPass, Unit, UnitStep } from './model.js';
 import { popcount, weave, type Weave } from './weave.js';
@@ -135,6 +135,18 @@ function merge(...lists: Diagnostic[][]): Diagnostic[] {
 
 /** From an AST (parsed, or built by a tool) to the model: weave, thread, layout. `earlier` are the parser's diagnostics. */
 export function compileAst(ast: PatternAst, earlier: Diagnostic[] = []): Result<Compiled> {
+  try {
+    return build(ast, earlier);
+  } catch (e) {
+    // A fault of ours, not the pattern's: say so, and still give callers a model (of no rows) to show.
+    const what = e instanceof Error ? e.message : String(e);
+    const fault: Diagnostic = { severity: 'error', id: 'internal', message: `Fourfold could not weave this pattern because of a fault of its own (${what})`, range: fileStart, hint: 'please report this, with the file' };
+    const empty = build({ ...ast, rows: [] }, [...earlier, fault]);
+    return { value: { ast, model: empty.value.model }, diagnostics: empty.diagnostics };
+  }
+}
+
+function build(ast: PatternAst, earlier: Diagnostic[]): Result<Compiled> {
   const net = weave(ast);
   const path = thread(net.value);
   const geo = layout(net.value, ast.header.beads);

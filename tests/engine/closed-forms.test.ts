@@ -96,6 +96,7 @@ describe('every bead is one object', () => {
       fc.integer({ min: 1, max: 8 }).map((R) => pattern('flat', fanRows(R))),
       fc.tuple(fc.integer({ min: 2, max: 8 }), fc.integer({ min: 1, max: 8 })).map(([c, r]) => pattern('tube', tubeRows(c, r))),
       fc.tuple(fc.integer({ min: 3, max: 8 }), fc.integer({ min: 1, max: 6 })).map(([c, r]) => pattern('round', tubeRows(c, r))),
+      fc.integer({ min: 3, max: 7 }).map((c) => pattern('round', [tubeRows(c, 1)[0]!, ['AAA', ...Array<string>(c - 2).fill('AB +ABA'), 'A'].join(' ')])),
     );
     fc.assert(
       fc.property(shapes, (ast) => {
@@ -109,6 +110,9 @@ describe('every bead is one object', () => {
           expect(b.units.length).toBe(holders[i]);
           expect([1, 2]).toContain(b.units.length);
         });
+        // The thread never jumps: each pass starts where the one before ended, through a bead that ends there.
+        for (let i = 1; i < m.thread.length; i++) expect(m.thread[i]!.from).toBe(m.thread[i - 1]!.to);
+        for (const p of m.thread) expect(new Set(m.beads[p.bead]!.junctions)).toEqual(new Set([p.from, p.to]));
         // Every bead is picked up exactly once by the thread.
         expect(m.thread.filter((p) => p.kind === 'pickup').map((p) => p.bead)).toEqual(m.beads.map((b) => b.id));
       }),

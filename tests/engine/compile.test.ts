@@ -3,7 +3,7 @@
  * file order, and the model for what could be built.
  */
 import { describe, expect, test } from 'vitest';
-import { compile } from '../../shared/compile.js';
+import { compile, compileAst } from '../../shared/compile.js';
 
 const text = (rows: string[]) => ['title: Compile test', 'layout: flat', 'colors:', '  A #f4f1ea', '  B #2e6f8e', ...rows, ''].join('\n');
 
@@ -31,4 +31,13 @@ describe('compile', () => {
     expect(diagnostics.some((d) => d.id === 'bead-count')).toBe(true);
     expect(value.model.beads).toEqual([]);
   });
+});
+
+test('a fault inside the engine is a diagnostic, not a crash', () => {
+  // An AST no parser would produce (a row whose items are not a list) stands in for an engine bug.
+  const ast = compile('title: T\ncolors:\n  A #ffffff\nrow 1: AAAA\n').value.ast;
+  const broken = { ...ast, rows: [{ ...ast.rows[0]!, items: null as unknown as [] }] };
+  const { value, diagnostics } = compileAst(broken);
+  expect(diagnostics.map((d) => d.id)).toEqual(['internal']);
+  expect(value.model.units).toEqual([]);
 });
