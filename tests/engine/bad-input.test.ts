@@ -60,6 +60,25 @@ describe('other checks', () => {
   });
 });
 
+describe('no-passage', () => {
+  test('a start corner farther than 12 beads from the thread is reported on that unit, and the piece is still built', () => {
+    // Row 2 skips 14 beads at its start, so its first unit sits 14 sides along the edge from where row 1 ended.
+    const row1 = ['AAAA', ...Array<string>(19).fill('AAA')].join(' ');
+    const row2 = `${'- '.repeat(14)}AAA AA AA AA AA AA`;
+    const { value, diagnostics } = compileAst(pattern('flat', [row1, row2]));
+    expect(diagnostics.map((d) => `${d.id} ${d.range.line}:${d.range.column}`)).toEqual(['no-passage 2:29']);
+    expect(diagnostics[0]!.message).toBe("row 2, unit 1: the thread cannot reach this unit's start through 12 or fewer beads already in place");
+    expect(value.model.units.filter((u) => u.row === 2 && !u.failed).length).toBe(6);
+    expect(value.model.thread.filter((p) => p.kind === 'pickup').length).toBe(value.model.beads.length);
+  });
+
+  test('a start within reach (after 10 skips) is not reported', () => {
+    const row1 = ['AAAA', ...Array<string>(19).fill('AAA')].join(' ');
+    const { diagnostics } = compileAst(pattern('flat', [row1, `${'- '.repeat(10)}AAA AA AA AA AA AA - - - -`]));
+    expect(diagnostics).toEqual([]);
+  });
+});
+
 describe('partial models', () => {
   test('a failing unit is reported, its row stops, and later rows build on what exists', () => {
     const { value, diagnostics } = compileAst(pattern('flat', ['AAAA AAA AAA AAA', 'AAA AA AAA AA', 'AAA AA']));
