@@ -89,9 +89,11 @@ export function UploadPanel({ onSaved }: { onSaved(items: UploadedItem[]): void 
                 {countText(f.diagnostics)}
                 {f.tally ? ` · ${f.tally.beads.toLocaleString()} beads` : ''}
               </p>
-              <div className="mt-2">
-                <DiagnosticList diagnostics={f.diagnostics} label={`Checks of ${f.name}`} />
-              </div>
+              {f.diagnostics.length > 0 && (
+                <div className="mt-2">
+                  <DiagnosticList diagnostics={f.diagnostics} label={`Checks of ${f.name}`} />
+                </div>
+              )}
             </article>
           ))}
           {withErrors > 0 && (

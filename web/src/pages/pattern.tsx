@@ -5,7 +5,7 @@
  */
 import { useQuery, type QueryClient } from '@tanstack/react-query';
 import { Link, useLoaderData, useNavigate, type LoaderFunctionArgs } from 'react-router-dom';
-import { useSession } from '../api/session.js';
+import { getSession, useSession } from '../api/session.js';
 import type { PatternDetail } from '../api/types.js';
 import { patternQuery, tallyQuery, useDeletePattern } from '../queries/patterns.js';
 import { placeQuery, useSavePlace } from '../queries/place.js';
@@ -30,7 +30,9 @@ export const patternLoader =
   async (args: LoaderFunctionArgs) => {
     const { id, version } = patternParams(args);
     void queryClient.prefetchQuery(tallyQuery(id, version));
-    await queryClient.ensureQueryData(patternQuery(id, version));
+    // The reader's place comes with the page, so the stepper does not jump once it arrives.
+    const place = getSession()?.user.role === 'admin' ? null : queryClient.ensureQueryData(placeQuery(id));
+    await Promise.all([queryClient.ensureQueryData(patternQuery(id, version)), place]);
     return { id, version };
   };
 

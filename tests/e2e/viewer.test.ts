@@ -1,0 +1,209 @@
+/**
+ * The whole viewer in Chromium against the real server and MariaDB: a
+ * designer uploads, checks the chart against the tally, steps through a row,
+ * downloads the CLI's bytes, shares by link and by invitation; the invited
+ * tester sees only that pattern and leaves a note the designer resolves.
+ */
+import { execFile } from 'node:child_process';
+import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { promisify } from 'node:util';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser, BrowserContext, Page } from 'playwright-core';
+import { launchChromium, shot, watchErrors } from './browser.js';
+import { PASSWORD, startViewer, type Viewer } from './viewer-server.js';
+
+// An invented pattern of our own demo studio: a two-colour band of 4 rows of 3 units.
+const PATTERN = `title: Tidewater Band
+designer: Ines Marlow
+beads: 11/0 round
+layout: flat
+
+colors:
+  A  #F4F1EA  chalk
+  B  #2E6F8E  deep teal
+
+row 1: BBBB AAB BAB
+row 2: ABA BA AB
+note:  Keep the tension even so the units stay square.
+row 3: BAA AB BA
+row 4: AAB BB AA
+`;
+const TESTER = 'new.tester@example.com';
+
+let viewer: Viewer;
+let browser: Browser;
+let dir: string;
+let designer: BrowserContext;
+let page: Page;
+let patternId = 0;
+let errors: string[] = [];
+
+beforeAll(async () => {
+  [viewer, browser, dir] = await Promise.all([startViewer(), launchChromium(), mkdtemp(join(tmpdir(), 'fourfold-e2e-'))]);
+  designer = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+  designer.setDefaultTimeout(10_000);
+  page = await designer.newPage();
+  errors = watchErrors(page);
+});
+afterAll(async () => {
+  await browser?.close();
+  await viewer?.close();
+  if (dir) await rm(dir, { recursive: true, force: true });
+});
+
+async function signIn(p: Page, email: string, password = PASSWORD) {
+  await p.goto(`${viewer.url}/sign-in`);
+  await p.getByLabel('E-mail').fill(email);
+  await p.getByLabel('Password').fill(password);
+  await p.getByRole('button', { name: 'Sign in' }).click();
+  await p.getByRole('heading', { name: 'Library' }).waitFor();
+}
+
+const placeText = (p: Page) => p.getByTestId('stepper-place').textContent();
+
+describe('designer and tester in the browser', () => {
+  it('signs in, uploads a pattern, and sees a chart with as many beads as its tally', async () => {
+    await signIn(page, 'designer@example.com');
+    await shot(page, 'library');
+    const file = join(dir, 'tidewater-band.ffp');
+    await writeFile(file, PATTERN);
+    await page.getByRole('link', { name: 'Upload', exact: true }).click();
+    await page.getByLabel('Pattern files', { exact: true }).setInputFiles(file);
+    await page.getByRole('article', { name: 'tidewater-band.ffp' }).getByText('No problems found').waitFor();
+    await shot(page, 'upload-checked');
+    await page.getByRole('button', { name: 'Save this pattern' }).click();
+    await page.waitForURL(/\/patterns\/\d+$/);
+    patternId = Number(/\/patterns\/(\d+)$/.exec(page.url())![1]);
+    await page.getByRole('heading', { name: 'Tidewater Band', exact: true }).waitFor();
+
+    const tallyText = await page.getByTestId('tally-beads').textContent();
+    const beads = await page.getByTestId('chart').locator('[data-bead]').count();
+    expect(beads).toBe(Number(tallyText!.replace(/\D/g, '')));
+    // Source: NOTATION.md section 8, a flat panel of n units by r rows has n(r + 1) + r(n + 1) beads: 3 x 4 gives 31.
+    expect(beads).toBe(3 * 5 + 4 * 4);
+    await page.getByTestId('chart').locator('[data-bead]').first().hover();
+    expect(await page.getByTestId('bead-tooltip').textContent()).toMatch(/Row \d+, unit \d+, (base|far|top|near)/);
+    await shot(page, 'pattern');
+  });
+
+  it('steps through a row with the arrow keys and finds the place again after a reload', async () => {
+    expect(await placeText(page)).toBe('Row 1, unit 1 of 3');
+    await page.getByRole('heading', { name: 'Tidewater Band' }).click();
+    const saved = page.waitForResponse((r) => r.url().endsWith(`/api/patterns/${patternId}/place`) && r.request().method() === 'PUT');
+    for (let i = 0; i < 3; i++) await page.keyboard.press('ArrowRight');
+    expect(await placeText(page)).toBe('Row 2, unit 1 of 3');
+    expect(await page.getByTestId('step-text').textContent()).toMatch(/Pick up/);
+    expect(await page.locator('.ff-bead.ff-highlight').count()).toBe(3);
+    await saved;
+    await page.reload();
+    await page.getByTestId('stepper-place').waitFor();
+    expect(await placeText(page)).toBe('Row 2, unit 1 of 3');
+  });
+
+  it('downloads the chart as SVG with the same bytes the CLI writes', async () => {
+    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Chart (SVG)' }).click()]);
+    const got = await readFile((await download.path())!);
+    const cliOut = join(dir, 'cli.svg');
+    await promisify(execFile)(process.execPath, ['bin/fourfold.js', 'chart', join(dir, 'tidewater-band.ffp'), '-o', cliOut]);
+    const want = await readFile(cliOut);
+    expect(got.length).toBeGreaterThan(1000);
+    expect(got.equals(want)).toBe(true);
+  });
+
+  let shareUrl = '';
+  it('creates a share link that opens in a fresh browser without signing in', async () => {
+    await page.getByRole('button', { name: 'Create share link' }).click();
+    shareUrl = (await page.getByTestId('share-url').textContent())!;
+    expect(shareUrl).toMatch(new RegExp(`^${viewer.url}/s/[A-Za-z0-9_-]{40,}$`));
+    const stranger = await browser.newContext();
+    const p = await stranger.newPage();
+    const strangerErrors = watchErrors(p);
+    await p.goto(shareUrl);
+    await p.getByRole('heading', { name: 'Tidewater Band' }).waitFor();
+    expect(await p.getByTestId('chart').locator('[data-bead]').count()).toBe(31);
+    expect(await p.getByRole('button', { name: 'Sign out' }).count()).toBe(0);
+    await p.keyboard.press('ArrowRight');
+    expect(await placeText(p)).toBe('Row 1, unit 2 of 3');
+    await shot(p, 'shared-view');
+    expect(strangerErrors).toEqual([]);
+    await stranger.close();
+  });
+
+  let inviteLink = '';
+  it('invites a tester, whose invitation arrives in the outbox', async () => {
+    await page.getByLabel("Tester's e-mail").fill(TESTER);
+    await page.getByRole('button', { name: 'Send invitation' }).click();
+    await page.getByText(`Invitation sent to ${TESTER}.`).waitFor();
+    await page.getByText(`Tester`).first().waitFor();
+    await shot(page, 'sharing');
+    const mail = viewer.mailer.outbox()!.find((m) => m.to.includes(TESTER));
+    expect(mail).toBeDefined();
+    inviteLink = /https?:\/\/\S+\/reset\?\S+/.exec(mail!.text)![0];
+    expect(inviteLink.startsWith(`${viewer.url}/reset?`)).toBe(true);
+  });
+
+  let tester: BrowserContext;
+  let tp: Page;
+  let notedUnit = '';
+  it('lets the tester choose a password, see only that pattern, and leave a note on a unit', async () => {
+    tester = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    tester.setDefaultTimeout(10_000);
+    tp = await tester.newPage();
+    const testerErrors = watchErrors(tp);
+    await tp.goto(inviteLink);
+    await tp.getByLabel('New password', { exact: true }).fill('tester-pass-1');
+    await tp.getByLabel('New password again').fill('tester-pass-1');
+    await tp.getByRole('button', { name: 'Save the password and sign in' }).click();
+    await tp.getByRole('heading', { name: 'Library' }).waitFor();
+    const rows = tp.locator('tbody tr');
+    expect(await rows.count()).toBe(1);
+    expect(await rows.first().getByRole('link').textContent()).toBe('Tidewater Band');
+    await shot(tp, 'tester-library-phone');
+
+    await rows.first().getByRole('link').click();
+    await tp.getByTestId('chart').waitFor();
+    await shot(tp, 'tester-pattern-phone');
+    await tp.getByTestId('chart').locator('[data-bead][data-row="3"]').first().click();
+    const place = (await placeText(tp))!;
+    notedUnit = /Row 3, unit (\d+)/.exec(place)![1]!;
+    await tp.getByLabel('Note', { exact: true }).fill('The second bead here reads as chalk on my screen.');
+    await tp.getByRole('button', { name: 'Add note' }).click();
+    await tp.getByTestId('feedback-note').getByText(`row 3, unit ${notedUnit}`).waitFor();
+    await shot(tp, 'tester-note-phone');
+    expect(testerErrors).toEqual([]);
+  });
+
+  it('shows the designer the open note on the chart, and resolves it', async () => {
+    await page.reload();
+    const note = page.getByTestId('feedback-note');
+    await note.getByText('The second bead here reads as chalk on my screen.').waitFor();
+    expect(await page.locator('.ff-bead.ff-noted').count()).toBeGreaterThan(0);
+    await note.getByRole('button', { name: 'Resolve' }).click();
+    await page.getByText('Open notes (0)').waitFor();
+    await page.getByText('Resolved notes (1)').waitFor();
+    await shot(page, 'resolved');
+    expect(errors).toEqual([]);
+  });
+
+  it('shows the tester a not-found page for a pattern that was not shared with them', async () => {
+    const login = await fetch(`${viewer.url}/api/auth/login`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ email: 'designer@example.com', password: PASSWORD }),
+    });
+    const { token } = (await login.json()) as { token: string };
+    const made = await fetch(`${viewer.url}/api/patterns`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` },
+      body: JSON.stringify({ source: PATTERN.replace('Tidewater Band', 'Private Band') }),
+    });
+    const other = ((await made.json()) as { items: { id: number }[] }).items[0]!.id;
+    await tp.goto(`${viewer.url}/patterns/${other}`);
+    await tp.getByRole('heading', { name: 'Not found' }).waitFor();
+    expect(await tp.getByText('Private Band').count()).toBe(0);
+    await shot(tp, 'not-found');
+    await tester.close();
+  });
+});
