@@ -250,6 +250,9 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
     .addHelpText('after', EXAMPLES)
     .showSuggestionAfterError(true);
   define(program, (cmd) => (parsed = cmd));
+  const asked = argv[0] === 'help' ? argv[1] : undefined;
+  if (asked !== undefined && !program.commands.some((c) => c.name() === asked))
+    return { value: null, error: withHint(`error: unknown command '${asked}'`, []) };
   try {
     program.parse([...argv], { from: 'user' });
   } catch (e) {

@@ -36,6 +36,10 @@ describe('parseArgs: top level', () => {
     expect(usageError()).toContain('Usage: fourfold');
   });
 
+  it('help for a command that does not exist is a usage error naming it', () => {
+    expect(usageError('help', 'nosuch')).toBe("error: unknown command 'nosuch'\n(run 'fourfold help' for usage)\n");
+  });
+
   it('suggests the nearest command for a typo', () => {
     const error = usageError('chekc', 'a.ffp');
     expect(error).toContain("unknown command 'chekc'");
