@@ -2,24 +2,15 @@
  * Who may see which pattern. Someone else's pattern, or one not shared with
  * a tester, is "not found", never "forbidden", so its existence stays hidden.
  */
-import { col, fn, literal, Op, type WhereOptions } from 'sequelize';
+import { col, fn, Op } from 'sequelize';
 import type { Models } from './models/index.js';
-import type { PatternAttributes, PatternInstance } from './models/pattern.js';
-import type { VersionInstance } from './models/version.js';
+import type { PatternInstance } from './models/pattern.js';
+import type { VersionAttributes, VersionInstance } from './models/version.js';
 import type { AuthContext } from './auth.js';
 import { notFound } from './errors.js';
 import type { Access, Sharing } from './serialize.js';
 
 const noPattern = () => notFound('No such pattern.');
-
-/** The patterns a caller may list: own (designer), invited to (tester), all (admin). */
-export function visibleWhere(models: Models, ctx: AuthContext): WhereOptions<PatternAttributes> {
-  const { user } = ctx;
-  if (user.role === 'admin') return {};
-  if (user.role === 'designer') return { ownerId: user.id };
-  const invited = literal(`(SELECT patternId FROM invitations WHERE testerId = ${Number(user.id)})`);
-  return { id: { [Op.in]: invited } };
-}
 
 export async function visiblePattern(models: Models, ctx: AuthContext, id: number): Promise<{ pattern: PatternInstance; access: Access }> {
   const pattern = await models.Pattern.findByPk(id, { include: [{ model: models.User, as: 'owner' }] });
@@ -41,10 +32,16 @@ export async function ownPattern(models: Models, ctx: AuthContext, id: number): 
   return pattern;
 }
 
-export async function findVersion(models: Models, pattern: PatternInstance, number?: number): Promise<VersionInstance> {
+/** A version of the pattern (the current one by default), with its author unless only some `attributes` are asked for. */
+export async function findVersion(
+  models: Models,
+  pattern: PatternInstance,
+  number?: number,
+  attributes?: (keyof VersionAttributes)[],
+): Promise<VersionInstance> {
   const version = await models.Version.findOne({
     where: { patternId: pattern.id, number: number ?? pattern.currentVersion },
-    include: [{ model: models.User, as: 'author' }],
+    ...(attributes ? { attributes } : { include: [{ model: models.User, as: 'author' }] }),
   });
   if (!version) throw notFound(`Version ${number} of this pattern does not exist.`);
   return version;

@@ -10,6 +10,7 @@ import helmet from 'helmet';
 import type { AppDeps } from './context.js';
 import { allow, bearer } from './auth.js';
 import { apiNotFound, errorHandler, notFound } from './errors.js';
+import { cachedRenderer } from './render.js';
 import { authRoutes } from './routes/auth.js';
 import { checkRoutes } from './routes/check.js';
 import { feedbackRoutes } from './routes/feedback.js';
@@ -21,14 +22,15 @@ import { sharedRoutes, viewRoutes } from './routes/views.js';
 
 function apiRouter(deps: AppDeps): Router {
   const api = Router();
+  const render = cachedRenderer();
   api.get('/health', (_req, res) => {
     res.json({ ok: true });
   });
   api.use('/auth', authRoutes(deps));
-  api.use('/shared', sharedRoutes(deps));
+  api.use('/shared', sharedRoutes(deps, render));
   api.use(bearer(deps.db.models));
   api.use('/check', checkRoutes(deps));
-  api.use('/patterns', patternRoutes(deps), viewRoutes(deps), sharingRoutes(deps), feedbackRoutes(deps));
+  api.use('/patterns', patternRoutes(deps), viewRoutes(deps, render), sharingRoutes(deps), feedbackRoutes(deps));
   api.use('/tokens', tokenRoutes(deps));
   api.use('/users', allow('admin'), userRoutes(deps));
   api.get('/dev/outbox', allow('admin'), (_req, res) => {

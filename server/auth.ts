@@ -21,6 +21,14 @@ export const SESSION_DAYS = 30;
 const DAY_MS = 86_400_000;
 /** lastUsedAt is refreshed at most this often, so reads do not each cost a write. */
 const TOUCH_MS = 60_000;
+/**
+ * A verified token is trusted this long without asking the database again.
+ * Any change to an account or a token made through this app empties the
+ * cache at once (model hooks below), so sign-out and role changes apply to
+ * the next request; the limit only bounds changes made by another process.
+ */
+const CACHE_MS = 5_000;
+const CACHE_MAX = 10_000;
 
 export function auth(res: Response): AuthContext {
   const context = res.locals.auth as AuthContext | undefined;
@@ -62,10 +70,28 @@ async function findByToken(models: Models, token: string): Promise<AuthContext |
 
 /** Middleware that requires a valid bearer token and puts the caller in `res.locals.auth`. */
 export function bearer(models: Models): RequestHandler {
+  const cache = new Map<string, { found: AuthContext; until: number }>();
+  const forget = () => cache.clear();
+  for (const hook of ['afterUpdate', 'afterDestroy', 'afterBulkUpdate', 'afterBulkDestroy'] as const) {
+    models.User.addHook(hook, forget);
+    models.AccessToken.addHook(hook, forget);
+  }
+  const lookup = async (token: string): Promise<AuthContext | null> => {
+    const now = Date.now();
+    const hit = cache.get(token);
+    if (hit && hit.until > now) return hit.found;
+    const found = await findByToken(models, token);
+    if (found) {
+      if (cache.size >= CACHE_MAX) cache.clear();
+      const expires = found.token.expiresAt?.getTime() ?? Infinity;
+      cache.set(token, { found, until: Math.min(now + CACHE_MS, expires) });
+    }
+    return found;
+  };
   const passport = new Passport();
   passport.use(
     new BearerStrategy((token, done) => {
-      findByToken(models, token).then(
+      lookup(token).then(
         (found) => done(null, found ?? false),
         (error: unknown) => done(error),
       );

@@ -2,6 +2,7 @@
  * Charts, tally, steps, kit and model of a stored version, through the same
  * public functions the CLI uses, so downloads match the CLI byte for byte.
  */
+import { createHash } from 'node:crypto';
 import { z } from 'zod';
 import { renderChartSvg } from '../bin/render/chart-files.js';
 import { svgToPng, DEFAULT_DPI } from '../bin/render/png.js';
@@ -17,6 +18,8 @@ import { check } from './validate.js';
 export interface Rendered {
   type: string;
   body: string | Buffer;
+  /** Set on cached charts, so a repeat is not hashed again for its ETag. */
+  etag?: string;
 }
 
 export type ViewKind = 'chart.svg' | 'chart.png' | 'tally' | 'steps' | 'kit' | 'model';
@@ -45,6 +48,33 @@ function needsClean(model: Model): void {
   if (hasErrors(model.diagnostics)) {
     throw new HttpError(422, 'has-errors', 'This version has errors; fix them first, a partial list would mislead.');
   }
+}
+
+export type Render = (kind: ViewKind, versionId: number, loadModel: () => Promise<Model | null>, query: Record<string, unknown>) => Promise<Rendered>;
+
+/**
+ * renderView behind a small LRU of charts by version and options, for one
+ * app: a version never changes and the chart is byte-identical for the same
+ * input, so a cached chart is the chart. Other views are cheap and not kept.
+ */
+export function cachedRenderer(max = 64): Render {
+  const cache = new Map<string, Rendered>();
+  return async (kind, versionId, loadModel, query) => {
+    const key = kind.startsWith('chart.') ? `${versionId}:${kind}:${JSON.stringify(check(chartQuery, query))}` : null;
+    const hit = key ? cache.get(key) : undefined;
+    if (key && hit) {
+      cache.delete(key);
+      cache.set(key, hit);
+      return hit;
+    }
+    const rendered = await renderView(kind, await loadModel(), query);
+    if (!key) return rendered;
+    const body = typeof rendered.body === 'string' ? Buffer.from(rendered.body, 'utf8') : rendered.body;
+    const out = { ...rendered, body, etag: `"${createHash('sha1').update(body).digest('base64url')}"` };
+    cache.set(key, out);
+    if (cache.size > max) cache.delete(cache.keys().next().value!);
+    return out;
+  };
 }
 
 export async function renderView(kind: ViewKind, model: Model | null, query: Record<string, unknown>): Promise<Rendered> {

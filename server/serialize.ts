@@ -1,12 +1,12 @@
 /** Rows to the JSON shapes of docs/server.md. */
 import type { FeedbackInstance } from './models/feedback.js';
-import type { PatternInstance } from './models/pattern.js';
+import type { PatternAttributes, PatternInstance } from './models/pattern.js';
 import type { UserInstance } from './models/user.js';
 import type { VersionInstance } from './models/version.js';
 import { countSeverity } from './engine.js';
 
 const iso = (d: Date | null | undefined): string | null => (d ? new Date(d).toISOString() : null);
-const person = (u: UserInstance | null | undefined) => (u ? { id: u.id, name: u.name } : { id: 0, name: 'Former member' });
+const person = (u: { id: number; name: string } | null | undefined) => (u ? { id: u.id, name: u.name } : { id: 0, name: 'Former member' });
 
 export const toUser = (u: UserInstance) => ({ id: u.id, name: u.name, email: u.email, role: u.role, createdAt: iso(u.createdAt) });
 
@@ -15,8 +15,11 @@ export interface Sharing {
   testers: number;
 }
 
-export function toSummary(p: PatternInstance, sharing: Sharing) {
-  const owner = (p as PatternInstance & { owner?: UserInstance }).owner;
+/** A pattern row with its owner's id and name (an instance with `owner` included, or a plain row). */
+export type PatternRow = Omit<PatternAttributes, 'ownerId'> & { owner?: { id: number; name: string } | null };
+
+export function toSummary(p: PatternRow, sharing: Sharing) {
+  const owner = p.owner;
   return {
     id: p.id,
     title: p.title,

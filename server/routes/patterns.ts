@@ -1,9 +1,9 @@
 import { Router } from 'express';
-import { Op, type Order } from 'sequelize';
 import { z } from 'zod';
 import type { AppDeps } from '../context.js';
 import { allow, auth } from '../auth.js';
-import { findVersion, ownPattern, sharingOf, visiblePattern, visibleWhere } from '../access.js';
+import { findVersion, ownPattern, sharingOf, visiblePattern } from '../access.js';
+import { listPatterns } from '../library.js';
 import { toDetail, toSummary, toVersion } from '../serialize.js';
 import { acceptUploads, sourcesOf } from '../uploads.js';
 import { addVersion, createPatterns } from '../versions.js';
@@ -16,9 +16,6 @@ const listQuery = z.object({
   ...pageQuery,
 });
 
-const SORT_COLUMN = { updated: 'updatedAt', title: 'title', beads: 'beads' } as const;
-const likeEscape = (text: string): string => text.replace(/[\\%_]/g, (c) => `\\${c}`);
-
 export function patternRoutes(deps: AppDeps): Router {
   const { db } = deps;
   const { models } = db;
@@ -26,19 +23,7 @@ export function patternRoutes(deps: AppDeps): Router {
 
   router.get('/', async (req, res) => {
     const query = check(listQuery, req.query);
-    const ctx = auth(res);
-    const dir = (query.dir ?? (query.sort === 'title' ? 'asc' : 'desc')).toUpperCase();
-    const where = { ...visibleWhere(models, ctx), ...(query.q ? { title: { [Op.like]: `%${likeEscape(query.q)}%` } } : {}) };
-    const order: Order = [[SORT_COLUMN[query.sort], dir], ['id', dir]];
-    const { rows, count } = await models.Pattern.findAndCountAll({
-      where,
-      order,
-      limit: query.pageSize,
-      offset: (query.page - 1) * query.pageSize,
-      include: [{ model: models.User, as: 'owner', attributes: ['id', 'name'] }],
-    });
-    const sharing = await sharingOf(models, rows.map((p) => p.id));
-    res.json({ items: rows.map((p) => toSummary(p, sharing.get(p.id)!)), total: count, page: query.page, pageSize: query.pageSize });
+    res.json(await listPatterns(db, auth(res), query));
   });
 
   router.post('/', allow('designer'), acceptUploads, async (req, res) => {

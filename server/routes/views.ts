@@ -9,7 +9,7 @@ import { auth } from '../auth.js';
 import { findVersion, sharingOf, visiblePattern } from '../access.js';
 import type { Model } from '../../shared/model.js';
 import type { PatternInstance } from '../models/pattern.js';
-import { renderView, type ViewKind } from '../render.js';
+import type { Render, ViewKind } from '../render.js';
 import { toDetail } from '../serialize.js';
 import { check, idParams, versionQuery } from '../validate.js';
 import { sharedPatternId } from './sharing.js';
@@ -18,33 +18,39 @@ const VIEWS: ViewKind[] = ['chart.svg', 'chart.png', 'tally', 'steps', 'kit', 'm
 const SHARED_VIEWS: ViewKind[] = ['chart.svg', 'chart.png', 'tally', 'steps'];
 const sharedParams = z.object({ token: z.string().max(100) });
 
-async function send(res: Response, deps: AppDeps, pattern: PatternInstance, kind: ViewKind, query: Record<string, unknown>) {
+async function send(res: Response, deps: AppDeps, render: Render, pattern: PatternInstance, kind: ViewKind, query: Record<string, unknown>) {
   const { version } = check(versionQuery, { version: query.version });
-  const shown = await findVersion(deps.db.models, pattern, version);
-  const model = shown.model ? (JSON.parse(shown.model) as Model) : null;
-  const out = await renderView(kind, model, query);
+  const { Version } = deps.db.models;
+  const shown = await findVersion(deps.db.models, pattern, version, ['id', 'number']);
+  // The model text is read only when the chart is not already rendered.
+  const loadModel = async () => {
+    const row = await Version.findByPk(shown.id, { attributes: ['model'] });
+    return row?.model ? (JSON.parse(row.model) as Model) : null;
+  };
+  const out = await render(kind, shown.id, loadModel, query);
   if (/^(image\/svg|text\/html)/.test(out.type)) {
     // A chart or a printable page is shown, never a document that may run script with the API's rights.
     res.setHeader('Content-Security-Policy', 'sandbox');
   }
   res.setHeader('X-Content-Type-Options', 'nosniff');
+  if (out.etag) res.setHeader('ETag', out.etag);
   res.type(out.type).send(out.body);
 }
 
-export function viewRoutes(deps: AppDeps): Router {
+export function viewRoutes(deps: AppDeps, render: Render): Router {
   const { models } = deps.db;
   const router = Router();
   for (const kind of VIEWS) {
     router.get(`/:id/${kind}`, async (req, res) => {
       const { id } = check(idParams, req.params);
       const { pattern } = await visiblePattern(models, auth(res), id);
-      await send(res, deps, pattern, kind, req.query as Record<string, unknown>);
+      await send(res, deps, render, pattern, kind, req.query as Record<string, unknown>);
     });
   }
   return router;
 }
 
-export function sharedRoutes(deps: AppDeps): Router {
+export function sharedRoutes(deps: AppDeps, render: Render): Router {
   const { models } = deps.db;
   const router = Router();
   const sharedPattern = async (token: string) => {
@@ -61,7 +67,7 @@ export function sharedRoutes(deps: AppDeps): Router {
   for (const kind of SHARED_VIEWS) {
     router.get(`/:token/${kind}`, async (req, res) => {
       const { token } = check(sharedParams, req.params);
-      await send(res, deps, await sharedPattern(token), kind, req.query as Record<string, unknown>);
+      await send(res, deps, render, await sharedPattern(token), kind, req.query as Record<string, unknown>);
     });
   }
   return router;

@@ -1,0 +1,77 @@
+/**
+ * The library page: one hand-written query for the rows of a page and one
+ * for the total. It is the most requested read, so it skips the ORM's
+ * instance building; every value still goes in as a bound parameter.
+ */
+import { QueryTypes } from 'sequelize';
+import type { AuthContext } from './auth.js';
+import type { Db } from './db/connect.js';
+import type { PatternColor } from './models/pattern.js';
+import { toSummary } from './serialize.js';
+
+export interface LibraryQuery {
+  q?: string;
+  sort: 'updated' | 'title' | 'beads';
+  dir?: 'asc' | 'desc';
+  page: number;
+  pageSize: number;
+}
+
+interface Row {
+  id: number;
+  title: string;
+  layout: string;
+  rows: number;
+  units: number | null;
+  beads: number | null;
+  colors: PatternColor[] | string;
+  currentVersion: number;
+  errors: number;
+  warnings: number;
+  createdAt: Date;
+  updatedAt: Date;
+  ownerId: number;
+  ownerName: string;
+  links: number | bigint;
+  testers: number | bigint;
+}
+
+const SORT_COLUMN = { updated: 'p.updatedAt', title: 'p.title', beads: 'p.beads' } as const;
+const likeEscape = (text: string): string => text.replace(/[\\%_]/g, (c) => `\\${c}`);
+
+/** Own patterns for a designer, invited ones for a tester, all for an admin. */
+function visibility(ctx: AuthContext): { sql: string; params: unknown[] } {
+  const { role, id } = ctx.user;
+  if (role === 'admin') return { sql: '1 = 1', params: [] };
+  if (role === 'designer') return { sql: 'p.ownerId = ?', params: [id] };
+  return { sql: 'p.id IN (SELECT i.patternId FROM invitations i WHERE i.testerId = ?)', params: [id] };
+}
+
+export async function listPatterns(db: Db, ctx: AuthContext, query: LibraryQuery) {
+  const seen = visibility(ctx);
+  const where = [seen.sql, ...(query.q ? ['p.title LIKE ?'] : [])].join(' AND ');
+  const params = [...seen.params, ...(query.q ? [`%${likeEscape(query.q)}%`] : [])];
+  const dir = (query.dir ?? (query.sort === 'title' ? 'asc' : 'desc')) === 'asc' ? 'ASC' : 'DESC';
+  const page = `
+    SELECT p.id, p.title, p.layout, p.rows, p.units, p.beads, p.colors, p.currentVersion, p.errors, p.warnings,
+           p.createdAt, p.updatedAt, p.ownerId, u.name AS ownerName,
+           (SELECT COUNT(*) FROM share_links s WHERE s.patternId = p.id AND s.revokedAt IS NULL
+              AND (s.expiresAt IS NULL OR s.expiresAt > UTC_TIMESTAMP())) AS links,
+           (SELECT COUNT(*) FROM invitations i2 WHERE i2.patternId = p.id) AS testers
+    FROM (SELECT p.id FROM patterns p WHERE ${where}
+          ORDER BY ${SORT_COLUMN[query.sort]} ${dir}, p.id ${dir} LIMIT ? OFFSET ?) AS chosen
+    JOIN patterns p ON p.id = chosen.id
+    JOIN users u ON u.id = p.ownerId
+    ORDER BY ${SORT_COLUMN[query.sort]} ${dir}, p.id ${dir}`;
+  const [rows, counted] = await Promise.all([
+    db.sequelize.query<Row>(page, { replacements: [...params, query.pageSize, (query.page - 1) * query.pageSize], type: QueryTypes.SELECT }),
+    db.sequelize.query<{ n: number | bigint }>(`SELECT COUNT(*) AS n FROM patterns p WHERE ${where}`, { replacements: params, type: QueryTypes.SELECT }),
+  ]);
+  const items = rows.map((r) =>
+    toSummary(
+      { ...r, colors: typeof r.colors === 'string' ? (JSON.parse(r.colors) as PatternColor[]) : r.colors, owner: { id: r.ownerId, name: r.ownerName } },
+      { links: Number(r.links), testers: Number(r.testers) },
+    ),
+  );
+  return { items, total: Number(counted[0]?.n ?? 0), page: query.page, pageSize: query.pageSize };
+}
