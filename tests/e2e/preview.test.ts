@@ -69,7 +69,8 @@ async function nextState(until: (s: PreviewState) => boolean, change: () => Prom
 }
 
 const beadCount = () => page.getByTestId('chart').locator('[data-bead]').count();
-const waitForBeads = (n: number) => page.waitForFunction((want) => document.querySelectorAll('[data-testid="chart"] [data-bead]').length === want, n);
+// A string, because the test code is type-checked for Node, where there is no document.
+const waitForBeads = (n: number) => page.waitForFunction(`document.querySelectorAll('[data-testid="chart"] [data-bead]').length === ${n}`);
 
 describe('live preview', () => {
   it('sends a new model over the event stream when the file is saved', async () => {
