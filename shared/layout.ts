@@ -26,7 +26,7 @@ export interface Geometry {
 /** Drawn length of the short bead under a round increase. */
 export const GAP_BEAD_LENGTH = 0.35;
 const TAU = 2 * Math.PI;
-const deg = (rad: number): number => (((rad * 180) / Math.PI) % 360 + 360) % 360;
+const deg = (rad: number): number => ((((rad * 180) / Math.PI) % 360) + 360) % 360;
 const ccw = (a: number, b: number): number => (((b - a) % TAU) + TAU) % TAU;
 /** The angle midway between two, along the shorter way round (a bead spans less than half a ring). */
 const between = (a: number, b: number): number => (ccw(a, b) <= Math.PI ? a + ccw(a, b) / 2 : b + ccw(b, a) / 2);
@@ -190,18 +190,31 @@ function bounds(w: Weave, g: Geometry): void {
  * in mm, plus one bead diameter for the outer beads' thickness. A tube's width
  * is its circumference unrolled (no outer bead on the seam: it wraps round).
  */
-export function sizeInMm(info: Geometry['info'], layout: Weave['layout'], beads: { size: string; shape: 'round' | 'cylinder' }): LayoutInfo {
+export function sizeInMm(
+  info: Geometry['info'],
+  layout: Weave['layout'],
+  beads: { size: string; shape: 'round' | 'cylinder' },
+): LayoutInfo {
   const b = beadSize(beads.size, beads.shape);
   const unitMm = unitSideMm(b);
   const { minX, minY, maxX, maxY } = info.bounds;
   const tenth = (mm: number): number => Math.round(mm * 10) / 10;
   const widthMm = layout === 'tube' ? (maxX - minX) * unitMm : (maxX - minX) * unitMm + b.diameterMm;
   const heightMm = (maxY - minY) * unitMm + b.diameterMm;
-  return { ...info, beadMm: { diameter: b.diameterMm, length: b.lengthMm }, unitMm, widthMm: tenth(widthMm), heightMm: tenth(heightMm) };
+  return {
+    ...info,
+    beadMm: { diameter: b.diameterMm, length: b.lengthMm },
+    unitMm,
+    widthMm: tenth(widthMm),
+    heightMm: tenth(heightMm),
+  };
 }
 
 /** Lays out the net. Pure arithmetic on the weave; every junction and bead of a built unit gets a place. */
-export function layout(w: Weave, beads: { size: string; shape: 'round' | 'cylinder' }): Result<Geometry & { size: LayoutInfo }> {
+export function layout(
+  w: Weave,
+  beads: { size: string; shape: 'round' | 'cylinder' },
+): Result<Geometry & { size: LayoutInfo }> {
   const g = blank(w);
   if (w.layout === 'round') roundLayout(w, g);
   else gridLayout(w, g);

@@ -30,7 +30,11 @@ function keysIn(model: Model, target: KeyOrder): string[] {
 }
 
 const signature = (items: readonly ItemNode[]): string =>
-  items.map((it) => (it.type === 'unit' ? `${it.mark}${it.keys}` : it.type === 'skip' ? '-' : `(${signature(it.items)})x${it.times}`)).join(' ');
+  items
+    .map((it) =>
+      it.type === 'unit' ? `${it.mark}${it.keys}` : it.type === 'skip' ? '-' : `(${signature(it.items)})x${it.times}`,
+    )
+    .join(' ');
 
 /** The items with converted keys, taking units from `next` in order of work. */
 function convertItems(items: readonly ItemNode[], next: () => string): ItemNode[] {

@@ -42,7 +42,8 @@ export function startCorners(shared: number, dir: 1 | -1): number[] {
 }
 
 /** The n-th place (0-3) met going round from corner `start`; the thread enters it at corner p-1 (forward) or p (backward). */
-export const placeAt = (start: number, dir: 1 | -1, n: number): number => (dir === 1 ? (start + 1 + n) % 4 : (start - n + 4) % 4);
+export const placeAt = (start: number, dir: 1 | -1, n: number): number =>
+  dir === 1 ? (start + 1 + n) % 4 : (start - n + 4) % 4;
 
 class Sim {
   readonly rank: number[];
@@ -123,7 +124,12 @@ class Sim {
   }
 
   /** Picks up at free places and passes shared ones; a unit sharing nothing passes its first bead again. */
-  private goRound(u: WeaveUnit, dir: 1 | -1, corner: number, record: boolean): { pos: Pos; picked: number[]; actions: StepAction[] } {
+  private goRound(
+    u: WeaveUnit,
+    dir: 1 | -1,
+    corner: number,
+    record: boolean,
+  ): { pos: Pos; picked: number[]; actions: StepAction[] } {
     const picked: number[] = [];
     // Sized up front: a large model holds hundreds of thousands of these lists.
     const actions: StepAction[] = record ? new Array<StepAction>(u.shared === 0 ? 5 : 4) : [];
@@ -223,7 +229,15 @@ class Sim {
 }
 
 function emptyStep(unit: number): UnitStep {
-  return { unit, direction: 'forward', startCorner: 'base|far', firstPlace: 'base', cue: false, actions: [], moveOn: [] };
+  return {
+    unit,
+    direction: 'forward',
+    startCorner: 'base|far',
+    firstPlace: 'base',
+    cue: false,
+    actions: [],
+    moveOn: [],
+  };
 }
 
 function buildNet(w: Weave, rank: number[]): Net {
@@ -251,5 +265,8 @@ function buildNet(w: Weave, rank: number[]): Net {
 export function thread(w: Weave): Result<Thread> {
   const sim = new Sim(w);
   sim.run();
-  return { value: { rank: sim.rank, color: sim.color, passes: sim.passes, steps: sim.steps }, diagnostics: sim.diagnostics };
+  return {
+    value: { rank: sim.rank, color: sim.color, passes: sim.passes, steps: sim.steps },
+    diagnostics: sim.diagnostics,
+  };
 }

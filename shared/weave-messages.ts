@@ -4,12 +4,19 @@
  */
 import type { Diagnostic, Severity, SourceRange } from './diagnostic.js';
 import type { Layout, UnitNode } from '../parser/ast.js';
+import type { FlatItem } from '../parser/expand.js';
 
 const BASE_BIT = 1;
 const FAR_BIT = 2;
 const NEAR_BIT = 8;
 
-export function weaveDiagnostic(severity: Severity, id: string, message: string, range: SourceRange, hint?: string): Diagnostic {
+export function weaveDiagnostic(
+  severity: Severity,
+  id: string,
+  message: string,
+  range: SourceRange,
+  hint?: string,
+): Diagnostic {
   return hint === undefined ? { severity, id, message, range } : { severity, id, message, range, hint };
 }
 
@@ -36,7 +43,8 @@ interface Where {
 function suggestion(shared: number, expected: number, unit: UnitNode, where: Where): string {
   const written = unit.keys.length;
   if (unit.mark === '' && written === expected + 1 && shared & BASE_BIT && !where.first) {
-    if (where.layout === 'round' || (where.layout === 'flat' && where.last)) return "Mark an increase with '+' if that is meant.";
+    if (where.layout === 'round' || (where.layout === 'flat' && where.last))
+      return "Mark an increase with '+' if that is meant.";
   }
   if (unit.mark === '' && written === 4 && where.first && !where.firstRow && where.layout === 'flat')
     return "Mark a fresh ring with '*' if that is meant.";
@@ -46,11 +54,49 @@ function suggestion(shared: number, expected: number, unit: UnitNode, where: Whe
 }
 
 /** `row 4, unit 3: this unit shares its near bead and a base bead, so it takes 2 new beads; 3 are written (C C B). ...` */
-export function beadCountMessage(row: number, index: number, shared: number, expected: number, unit: UnitNode, where: Where): { message: string } {
+export function beadCountMessage(
+  row: number,
+  index: number,
+  shared: number,
+  expected: number,
+  unit: UnitNode,
+  where: Where,
+): { message: string } {
   const written = unit.keys.length;
   const spaced = [...unit.keys].join(' ');
   const message =
     `row ${row}, unit ${index}: ${sharesPhrase(shared, unit.mark, where.first, where.firstRow)}, so it takes ${expected} new bead${expected === 1 ? '' : 's'}; ` +
     `${written} ${written === 1 ? 'is' : 'are'} written (${spaced}). ${suggestion(shared, expected, unit, where)}`;
   return { message };
+}
+
+/** Why a unit's mark is not allowed where it stands (NOTATION.md section 2, "Marks"), or null. */
+export function misplacedMark(
+  layout: Layout,
+  item: UnitNode,
+  first: boolean,
+  firstRow: boolean,
+  i: number,
+  items: readonly FlatItem[],
+): string | null {
+  if (item.mark === '*') {
+    if (layout !== 'flat') return `a fresh ring '*' is only used in flat pieces; this is a ${layout}`;
+    if (firstRow)
+      return "row 1 starts with an unmarked unit; '*' starts a later row one place beyond the end of the row before";
+    if (!first || i > 0) return "a fresh ring '*' can only be the first unit of a row";
+  }
+  if (item.mark === '+') {
+    if (first) return "an increase '+' shares the bead of the unit before it, so it cannot be a row's first unit";
+    if (firstRow) return "row 1 has no row below it, so an increase '+' means nothing there; write the unit unmarked";
+    if (layout === 'tube') return "a tube keeps the same number of units in every row, so it has no increases '+'";
+    if (layout === 'flat' && items.slice(i + 1).some((it) => it.type === 'unit' && it.mark !== '+'))
+      return "in a flat piece an increase '+' can only stand at the end of a row, after the units built on the row before";
+  }
+  return null;
+}
+
+export function misplacedSkip(firstRow: boolean): string {
+  return firstRow
+    ? "row 1 has no row below it to pass over, so it cannot skip '-'"
+    : "in a flat piece a skip '-' can only stand at the start or the end of a row";
 }

@@ -69,7 +69,14 @@ function unitsOf(w: Weave, t: Thread, g: Geometry, id: (old: number) => number |
   });
 }
 
-function assembleModel(ast: PatternAst, w: Weave, t: Thread, g: Geometry, layout: LayoutInfo, diagnostics: Diagnostic[]): Model {
+function assembleModel(
+  ast: PatternAst,
+  w: Weave,
+  t: Thread,
+  g: Geometry,
+  layout: LayoutInfo,
+  diagnostics: Diagnostic[],
+): Model {
   const id = (old: number): number | null => (old < 0 ? null : t.rank[old]!);
   const ranked = (b: number): number => t.rank[b]!;
   // The thread's records are renumbered in place: they are built for this model and for nothing else.
@@ -140,7 +147,13 @@ export function compileAst(ast: PatternAst, earlier: Diagnostic[] = []): Result<
   } catch (e) {
     // A fault of ours, not the pattern's: say so, and still give callers a model (of no rows) to show.
     const what = e instanceof Error ? e.message : String(e);
-    const fault: Diagnostic = { severity: 'error', id: 'internal', message: `Fourfold could not weave this pattern because of a fault of its own (${what})`, range: fileStart, hint: 'please report this, with the file' };
+    const fault: Diagnostic = {
+      severity: 'error',
+      id: 'internal',
+      message: `Fourfold could not weave this pattern because of a fault of its own (${what})`,
+      range: fileStart,
+      hint: 'please report this, with the file',
+    };
     const empty = build({ ...ast, rows: [] }, [...earlier, fault]);
     return { value: { ast, model: empty.value.model }, diagnostics: empty.diagnostics };
   }
@@ -151,7 +164,9 @@ function build(ast: PatternAst, earlier: Diagnostic[]): Result<Compiled> {
   const path = thread(net.value);
   const geo = layout(net.value, ast.header.beads);
   // The parser words the size limit for the whole file; the engine's own stop at the limit need not say it again.
-  const own = earlier.some((d) => d.id === 'too-large') ? net.diagnostics.filter((d) => d.id !== 'too-large') : net.diagnostics;
+  const own = earlier.some((d) => d.id === 'too-large')
+    ? net.diagnostics.filter((d) => d.id !== 'too-large')
+    : net.diagnostics;
   const diagnostics = merge(earlier, own, path.diagnostics, geo.diagnostics);
   const model = assembleModel(ast, net.value, path.value, geo.value, geo.value.size, diagnostics);
   return { value: { ast, model }, diagnostics };

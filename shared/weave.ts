@@ -10,10 +10,10 @@
  * runs from corner p-1 to corner p.
  */
 import type { Diagnostic, Result, SourceRange } from './diagnostic.js';
-import type { Layout, KeyOrder, Mark, PatternAst, RowNode, UnitNode } from '../parser/ast.js';
+import type { Layout, KeyOrder, Mark, PatternAst, RowNode } from '../parser/ast.js';
 import { expandRow, type FlatItem } from '../parser/expand.js';
 import { UNIT_LIMIT } from '../parser/limits.js';
-import { weaveDiagnostic, beadCountMessage } from './weave-messages.js';
+import { weaveDiagnostic, beadCountMessage, misplacedMark, misplacedSkip } from './weave-messages.js';
 
 export const BASE = 0;
 export const FAR = 1;
@@ -72,7 +72,8 @@ interface BaseSlot {
   col: number;
 }
 
-export const popcount = (mask: number): number => (mask & 1) + ((mask >> 1) & 1) + ((mask >> 2) & 1) + ((mask >> 3) & 1);
+export const popcount = (mask: number): number =>
+  (mask & 1) + ((mask >> 1) & 1) + ((mask >> 2) & 1) + ((mask >> 3) & 1);
 
 class Builder {
   readonly w: Weave;
@@ -141,7 +142,11 @@ class Builder {
       const count = countUnits(expanded.value);
       for (let n = node.from; n <= node.to; n++) {
         if (expanded.diagnostics.length > 0 || used + count > UNIT_LIMIT) {
-          this.error('too-large', `the pattern expands past ${UNIT_LIMIT.toLocaleString('en')} units; it is built up to row ${n - 1}`, node.range);
+          this.error(
+            'too-large',
+            `the pattern expands past ${UNIT_LIMIT.toLocaleString('en')} units; it is built up to row ${n - 1}`,
+            node.range,
+          );
           return;
         }
         used += count;
@@ -185,7 +190,8 @@ class Builder {
           return { row, complete: false };
         }
         if (ptr >= slots.length) {
-          if (prev?.complete !== false) this.error('no-base-left', `row ${n}: this skip has no bead of row ${below} left to pass over`, item.range);
+          if (prev?.complete !== false)
+            this.error('no-base-left', `row ${n}: this skip has no bead of row ${below} left to pass over`, item.range);
           return { row, complete: false };
         }
         ptr++;
@@ -194,7 +200,7 @@ class Builder {
       index++;
       const first = index === 1;
       const closing = this.closed && i === lastUnitAt && !first;
-      const misplaced = this.checkMark(item, first, firstRow, i, items);
+      const misplaced = misplacedMark(w.layout, item, first, firstRow, i, items);
       const id = w.units.length;
       const unit: WeaveUnit = {
         row: n,
@@ -217,7 +223,8 @@ class Builder {
       const slot = slots[ptr];
       if (before) unit.beads[NEAR] = before.beads[FAR]!;
       if (wantsBase && slot) unit.beads[BASE] = slot.bead;
-      unit.col = wantsBase && slot ? slot.col : before ? before.col + h : item.mark === '*' ? (slot?.col ?? 0) - h : index - 1;
+      unit.col =
+        wantsBase && slot ? slot.col : before ? before.col + h : item.mark === '*' ? (slot?.col ?? 0) - h : index - 1;
       if (misplaced) {
         this.error('misplaced-mark', misplaced, item.range);
         return { row, complete: false };
@@ -229,18 +236,36 @@ class Builder {
           row.units.pop();
           return { row, complete: false };
         }
-        this.error('no-base-left', `row ${n}, unit ${index}: this unit needs a base bead, but row ${below} has none left to build on`, item.range, first ? undefined : "Mark an increase with '+' if a new unit beyond the row's end is meant.");
+        this.error(
+          'no-base-left',
+          `row ${n}, unit ${index}: this unit needs a base bead, but row ${below} has none left to build on`,
+          item.range,
+          first ? undefined : "Mark an increase with '+' if a new unit beyond the row's end is meant.",
+        );
         return { row, complete: false };
       }
       let shared = (before ? 1 << NEAR : 0) | (wantsBase ? 1 << BASE : 0);
       if (closing) shared |= 1 << FAR;
       const expected = 4 - popcount(shared);
       if (item.keys.length !== expected) {
-        const { message } = beadCountMessage(n, index, shared, expected, item, { layout: w.layout, first, firstRow, last: i === lastUnitAt });
+        const { message } = beadCountMessage(n, index, shared, expected, item, {
+          layout: w.layout,
+          first,
+          firstRow,
+          last: i === lastUnitAt,
+        });
         this.error('bead-count', message, item.range);
         return { row, complete: false };
       }
-      this.place(id, unit, before, shared, wantsBase ? slot! : null, slot ?? null, closing ? w.units[row.units[0]!]! : null);
+      this.place(
+        id,
+        unit,
+        before,
+        shared,
+        wantsBase ? slot! : null,
+        slot ?? null,
+        closing ? w.units[row.units[0]!]! : null,
+      );
       if (wantsBase) ptr++;
     }
     if (ptr < slots.length && !firstRow) {
@@ -256,24 +281,6 @@ class Builder {
       );
     }
     return { row, complete: true };
-  }
-
-  /** The reason a mark (or its absence) is not allowed here, or null. */
-  private checkMark(item: UnitNode, first: boolean, firstRow: boolean, i: number, items: readonly FlatItem[]): string | null {
-    const layout = this.w.layout;
-    if (item.mark === '*') {
-      if (layout !== 'flat') return `a fresh ring '*' is only used in flat pieces; this is a ${layout}`;
-      if (firstRow) return "row 1 starts with an unmarked unit; '*' starts a later row one place beyond the end of the row before";
-      if (!first || i > 0) return "a fresh ring '*' can only be the first unit of a row";
-    }
-    if (item.mark === '+') {
-      if (first) return "an increase '+' shares the bead of the unit before it, so it cannot be a row's first unit";
-      if (firstRow) return "row 1 has no row below it, so an increase '+' means nothing there; write the unit unmarked";
-      if (layout === 'tube') return "a tube keeps the same number of units in every row, so it has no increases '+'";
-      if (layout === 'flat' && items.slice(i + 1).some((it) => it.type === 'unit' && it.mark !== '+'))
-        return "in a flat piece an increase '+' can only stand at the end of a row, after the units built on the row before";
-    }
-    return null;
   }
 
   /** Shares, allocates and records the junctions and beads of a unit that passed its checks. */
@@ -322,12 +329,6 @@ function countUnits(items: readonly FlatItem[]): number {
 function lastIndexOf<T>(xs: readonly T[], pred: (x: T) => boolean): number {
   for (let i = xs.length - 1; i >= 0; i--) if (pred(xs[i]!)) return i;
   return -1;
-}
-
-function misplacedSkip(firstRow: boolean): string {
-  return firstRow
-    ? "row 1 has no row below it to pass over, so it cannot skip '-'"
-    : "in a flat piece a skip '-' can only stand at the start or the end of a row";
 }
 
 /** Builds the bead net. Never throws on user input: a unit that fails is reported and its row stops there. */

@@ -24,19 +24,33 @@ describe('bead-count', () => {
   });
 
   test('each shape of sharing says what it shares and what would make it valid', () => {
-    const message = (layout: Layout, rows: string[]) => only(pattern(layout, rows)).find((d) => d.id === 'bead-count')!.message;
-    expect(message('flat', ['AAA'])).toMatch(/^row 1, unit 1: the first unit of row 1 shares no bead, so it takes 4 new beads; 3 are written \(A A A\)\./);
-    expect(message('flat', ['AAAA AA'])).toMatch(/unit 2: this unit shares its near bead, so it takes 3 new beads; 2 are written/);
-    expect(message('flat', ['AAAA AAA', 'AAAA AA'])).toMatch(/shares a base bead, so it takes 3 new beads; 4 are written \(A A A A\)\. Mark a fresh ring with '\*'/);
-    expect(message('tube', ['AAAA AAA AAA'])).toMatch(/unit 3: this unit shares its near bead and its far bead \(the row closes on its first unit\), so it takes 2 new beads; 3 are written/);
-    expect(message('tube', ['AAAA AAA AA', 'AAA AA AA'])).toMatch(/shares its near bead, a base bead and its far bead .* so it takes 1 new bead; 2 are written/);
-    expect(message('flat', ['AAAA AAA', 'AAA +AA'])).toMatch(/so it takes 3 new beads; 2 are written \(A A\)\. Remove the '\+' if no increase is meant\./);
+    const message = (layout: Layout, rows: string[]) =>
+      only(pattern(layout, rows)).find((d) => d.id === 'bead-count')!.message;
+    expect(message('flat', ['AAA'])).toMatch(
+      /^row 1, unit 1: the first unit of row 1 shares no bead, so it takes 4 new beads; 3 are written \(A A A\)\./,
+    );
+    expect(message('flat', ['AAAA AA'])).toMatch(
+      /unit 2: this unit shares its near bead, so it takes 3 new beads; 2 are written/,
+    );
+    expect(message('flat', ['AAAA AAA', 'AAAA AA'])).toMatch(
+      /shares a base bead, so it takes 3 new beads; 4 are written \(A A A A\)\. Mark a fresh ring with '\*'/,
+    );
+    expect(message('tube', ['AAAA AAA AAA'])).toMatch(
+      /unit 3: this unit shares its near bead and its far bead \(the row closes on its first unit\), so it takes 2 new beads; 3 are written/,
+    );
+    expect(message('tube', ['AAAA AAA AA', 'AAA AA AA'])).toMatch(
+      /shares its near bead, a base bead and its far bead .* so it takes 1 new bead; 2 are written/,
+    );
+    expect(message('flat', ['AAAA AAA', 'AAA +AA'])).toMatch(
+      /so it takes 3 new beads; 2 are written \(A A\)\. Remove the '\+' if no increase is meant\./,
+    );
   });
 });
 
 describe('other checks', () => {
   test('misplaced marks', () => {
-    const ids = (layout: Layout, rows: string[]) => only(pattern(layout, rows)).map((d) => `${d.id} ${d.range.line}:${d.range.column}`);
+    const ids = (layout: Layout, rows: string[]) =>
+      only(pattern(layout, rows)).map((d) => `${d.id} ${d.range.line}:${d.range.column}`);
     expect(ids('flat', ['AAAA AAA', 'AAA +AAA AA'])).toEqual(['misplaced-mark 2:5']);
     expect(ids('flat', ['AAAA AAA', 'AAA *AAAA'])).toEqual(['misplaced-mark 2:5']);
     expect(ids('tube', ['AAAA AAA AA', 'AAA +AAA AA A'])).toEqual(['misplaced-mark 2:5']);
@@ -67,7 +81,9 @@ describe('no-passage', () => {
     const row2 = `${'- '.repeat(14)}AAA AA AA AA AA AA`;
     const { value, diagnostics } = compileAst(pattern('flat', [row1, row2]));
     expect(diagnostics.map((d) => `${d.id} ${d.range.line}:${d.range.column}`)).toEqual(['no-passage 2:29']);
-    expect(diagnostics[0]!.message).toBe("row 2, unit 1: the thread cannot reach this unit's start through 12 or fewer beads already in place");
+    expect(diagnostics[0]!.message).toBe(
+      "row 2, unit 1: the thread cannot reach this unit's start through 12 or fewer beads already in place",
+    );
     expect(value.model.units.filter((u) => u.row === 2 && !u.failed).length).toBe(6);
     expect(value.model.thread.filter((p) => p.kind === 'pickup').length).toBe(value.model.beads.length);
   });
@@ -111,9 +127,14 @@ describe('never throws, never hangs', () => {
         fc.constantFrom<Layout>('flat', 'tube', 'round'),
         fc.array(fc.array(itemArb, { minLength: 0, maxLength: 8 }), { minLength: 1, maxLength: 6 }),
         (layout, rows) => {
-          const ast = pattern(layout, rows.map(() => 'A'));
+          const ast = pattern(
+            layout,
+            rows.map(() => 'A'),
+          );
           ast.rows.forEach((row, r) => {
-            row.items = rows[r]!.map((it): ItemNode => (it.type === 'skip' ? { type: 'skip', range: row.range } : { ...it, range: row.range }));
+            row.items = rows[r]!.map((it): ItemNode =>
+              it.type === 'skip' ? { type: 'skip', range: row.range } : { ...it, range: row.range },
+            );
           });
           const { value } = compileAst(ast);
           for (const b of value.model.beads) expect([1, 2]).toContain(b.units.length);

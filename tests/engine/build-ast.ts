@@ -32,7 +32,12 @@ function items(text: string, line: number, base: number, start: number, end: num
       }
       const times = /^\s*x(\d+)/.exec(text.slice(k))!;
       const stop = k + times[0].length;
-      out.push({ type: 'group', items: items(text, line, base, i + 1, k - 1), times: Number(times[1]), range: at(line, i + 1, stop - i, base + i) });
+      out.push({
+        type: 'group',
+        items: items(text, line, base, i + 1, k - 1),
+        times: Number(times[1]),
+        range: at(line, i + 1, stop - i, base + i),
+      });
       i = stop;
     } else if (ch === '-') {
       out.push({ type: 'skip', range: at(line, i + 1, 1, base + i) });

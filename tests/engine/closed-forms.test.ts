@@ -66,25 +66,29 @@ describe('closed forms', () => {
   test('a round with increases has junctions - beads + units + gaps = 0', () => {
     // Source: Euler characteristic 0 of an annulus, the centre being open (Levin, as above).
     fc.assert(
-      fc.property(fc.integer({ min: 3, max: 10 }), fc.array(fc.integer({ min: 0, max: 3 }), { minLength: 1, maxLength: 6 }), (c, adds) => {
-        const rows = [['AAAA', ...Array<string>(c - 2).fill('AAA'), 'AA'].join(' ')];
-        let units = c;
-        for (const add of adds) {
-          // `add` increases spread through the round; each `+` adds a unit and builds on no bead.
-          const parts = ['AAA'];
-          for (let i = 1; i < units; i++) {
-            parts.push(i === units - 1 ? 'A' : 'AA');
-            if (i <= add && i < units - 1) parts.push('+AAA');
+      fc.property(
+        fc.integer({ min: 3, max: 10 }),
+        fc.array(fc.integer({ min: 0, max: 3 }), { minLength: 1, maxLength: 6 }),
+        (c, adds) => {
+          const rows = [['AAAA', ...Array<string>(c - 2).fill('AAA'), 'AA'].join(' ')];
+          let units = c;
+          for (const add of adds) {
+            // `add` increases spread through the round; each `+` adds a unit and builds on no bead.
+            const parts = ['AAA'];
+            for (let i = 1; i < units; i++) {
+              parts.push(i === units - 1 ? 'A' : 'AA');
+              if (i <= add && i < units - 1) parts.push('+AAA');
+            }
+            const made = parts.filter((p) => p.startsWith('+')).length;
+            rows.push(parts.join(' '));
+            units += made;
           }
-          const made = parts.filter((p) => p.startsWith('+')).length;
-          rows.push(parts.join(' '));
-          units += made;
-        }
-        const { value, diagnostics } = compileAst(pattern('round', rows));
-        expect(diagnostics).toEqual([]);
-        expect(value.model.rows.at(-1)!.units.length).toBe(units);
-        expect(euler(value.model)).toBe(0);
-      }),
+          const { value, diagnostics } = compileAst(pattern('round', rows));
+          expect(diagnostics).toEqual([]);
+          expect(value.model.rows.at(-1)!.units.length).toBe(units);
+          expect(euler(value.model)).toBe(0);
+        },
+      ),
     );
   });
 });
@@ -92,11 +96,21 @@ describe('closed forms', () => {
 describe('every bead is one object', () => {
   test('random valid panels, fans, tubes and rounds weave cleanly; each bead is held by 1 or 2 units', () => {
     const shapes = fc.oneof(
-      fc.tuple(fc.integer({ min: 1, max: 8 }), fc.integer({ min: 1, max: 8 })).map(([n, r]) => pattern('flat', panelRows(n, r))),
+      fc
+        .tuple(fc.integer({ min: 1, max: 8 }), fc.integer({ min: 1, max: 8 }))
+        .map(([n, r]) => pattern('flat', panelRows(n, r))),
       fc.integer({ min: 1, max: 8 }).map((R) => pattern('flat', fanRows(R))),
-      fc.tuple(fc.integer({ min: 2, max: 8 }), fc.integer({ min: 1, max: 8 })).map(([c, r]) => pattern('tube', tubeRows(c, r))),
-      fc.tuple(fc.integer({ min: 3, max: 8 }), fc.integer({ min: 1, max: 6 })).map(([c, r]) => pattern('round', tubeRows(c, r))),
-      fc.integer({ min: 3, max: 7 }).map((c) => pattern('round', [tubeRows(c, 1)[0]!, ['AAA', ...Array<string>(c - 2).fill('AB +ABA'), 'A'].join(' ')])),
+      fc
+        .tuple(fc.integer({ min: 2, max: 8 }), fc.integer({ min: 1, max: 8 }))
+        .map(([c, r]) => pattern('tube', tubeRows(c, r))),
+      fc
+        .tuple(fc.integer({ min: 3, max: 8 }), fc.integer({ min: 1, max: 6 }))
+        .map(([c, r]) => pattern('round', tubeRows(c, r))),
+      fc
+        .integer({ min: 3, max: 7 })
+        .map((c) =>
+          pattern('round', [tubeRows(c, 1)[0]!, ['AAA', ...Array<string>(c - 2).fill('AB +ABA'), 'A'].join(' ')]),
+        ),
     );
     fc.assert(
       fc.property(shapes, (ast) => {

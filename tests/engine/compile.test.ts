@@ -5,7 +5,8 @@
 import { describe, expect, test } from 'vitest';
 import { compile, compileAst } from '../../shared/compile.js';
 
-const text = (rows: string[]) => ['title: Compile test', 'layout: flat', 'colors:', '  A #f4f1ea', '  B #2e6f8e', ...rows, ''].join('\n');
+const text = (rows: string[]) =>
+  ['title: Compile test', 'layout: flat', 'colors:', '  A #f4f1ea', '  B #2e6f8e', ...rows, ''].join('\n');
 
 describe('compile', () => {
   test('a clean strip', () => {
@@ -19,7 +20,10 @@ describe('compile', () => {
 
   test("parser and engine diagnostics are merged in file order, each with its unit's line and column", () => {
     const { value, diagnostics } = compile(text(['row 1: AAAA BAB ABA', 'row 2: BAB ABA AB', 'row 3: BAB AB AC']));
-    expect(diagnostics.map((d) => `${d.id} ${d.range.line}:${d.range.column}`)).toEqual(['bead-count 7:12', 'unknown-color 8:16']);
+    expect(diagnostics.map((d) => `${d.id} ${d.range.line}:${d.range.column}`)).toEqual([
+      'bead-count 7:12',
+      'unknown-color 8:16',
+    ]);
     expect(value.model.diagnostics).toEqual(diagnostics);
     expect(value.model.units.filter((u) => u.failed).map((u) => `${u.row}.${u.index}`)).toEqual(['2.2']);
   });

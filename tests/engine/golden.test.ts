@@ -19,7 +19,11 @@ const valid = (m: Model) => {
   return ok ? [] : validate.errors!.map((e) => `${e.instancePath} ${e.message ?? ''}`);
 };
 
-const examples = existsSync('examples') ? readdirSync('examples').filter((f) => f.endsWith('.ffp')).sort() : [];
+const examples = existsSync('examples')
+  ? readdirSync('examples')
+      .filter((f) => f.endsWith('.ffp'))
+      .sort()
+  : [];
 const goldenDir = 'tests/engine/golden';
 
 describe.runIf(examples.length > 0)('examples', () => {

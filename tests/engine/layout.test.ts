@@ -21,10 +21,11 @@ describe('grid', () => {
       expect(b.angle).toBe(a!.y === z!.y ? 0 : 90);
     }
     // Every unit's centre is half a side in from its four beads.
-    for (const u of m.units) for (const p of ['base', 'far', 'top', 'near'] as const) {
-      const b = m.beads[u.places[p]!]!;
-      expect(Math.hypot(b.x - u.x, b.y - u.y)).toBe(0.5);
-    }
+    for (const u of m.units)
+      for (const p of ['base', 'far', 'top', 'near'] as const) {
+        const b = m.beads[u.places[p]!]!;
+        expect(Math.hypot(b.x - u.x, b.y - u.y)).toBe(0.5);
+      }
   });
 
   test('flat rows alternate heading; the first unit of row 2 sits over the last of row 1', () => {
@@ -46,7 +47,9 @@ describe('grid', () => {
 });
 
 describe('rings', () => {
-  const { value, diagnostics } = compileAst(pattern('round', ['AAAA AAA AAA AAA AAA AA', 'AAA AA +AAA AA AA +AAA AA A']));
+  const { value, diagnostics } = compileAst(
+    pattern('round', ['AAAA AAA AAA AAA AAA AA', 'AAA AA +AAA AA AA +AAA AA A']),
+  );
   const m = value.model;
   const r0 = m.layout.centerRadius!;
 
@@ -78,7 +81,13 @@ describe('rings', () => {
 describe('bead table', () => {
   test('every size named in NOTATION.md is in the table, with a sensible shape', () => {
     // Source: NOTATION.md section 2 lists the sizes; figures are from memory (see bead-sizes.ts).
-    for (const [size, shape] of [['15/0', 'round'], ['11/0', 'round'], ['8/0', 'round'], ['6/0', 'round'], ['11/0', 'cylinder']] as const) {
+    for (const [size, shape] of [
+      ['15/0', 'round'],
+      ['11/0', 'round'],
+      ['8/0', 'round'],
+      ['6/0', 'round'],
+      ['11/0', 'cylinder'],
+    ] as const) {
       const b = beadSize(size, shape);
       expect([b.size, b.shape]).toEqual([size, shape]);
       expect(b.perGram.low).toBeLessThan(b.perGram.high);

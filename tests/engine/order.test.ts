@@ -11,7 +11,8 @@ import { format, parse } from '../../parser/index.js';
 import type { Model } from '../../shared/model.js';
 import { pattern } from './build-ast.js';
 
-const colours = (m: Model) => m.units.map((u) => ['base', 'far', 'top', 'near'].map((p) => m.beads[u.places[p as 'base']!]!.color).join(''));
+const colours = (m: Model) =>
+  m.units.map((u) => ['base', 'far', 'top', 'near'].map((p) => m.beads[u.places[p as 'base']!]!.color).join(''));
 
 describe('convertOrder', () => {
   test('the worked check: row 1: ABCD BCA CAB in pick-up order is DABC ACB CAB in placed order', () => {
@@ -49,17 +50,26 @@ describe('convertOrder', () => {
 
   test('round trip over random flat pieces and tubes keeps every bead colour in place', () => {
     const unit = (n: number) => fc.stringMatching(new RegExp(`^[ABC]{${n}}$`));
-    const rowsArb = fc.integer({ min: 2, max: 6 }).chain((n) =>
-      fc.tuple(
-        fc.constantFrom('flat' as const, 'tube' as const),
-        fc.array(fc.array(unit(2), { minLength: n - 2, maxLength: n - 2 }), { minLength: 0, maxLength: 4 }),
-        fc.tuple(unit(4), fc.array(unit(3), { minLength: n - 2, maxLength: n - 2 }), unit(3), unit(2), unit(3), unit(1)),
-      ),
-    );
+    const rowsArb = fc
+      .integer({ min: 2, max: 6 })
+      .chain((n) =>
+        fc.tuple(
+          fc.constantFrom('flat' as const, 'tube' as const),
+          fc.array(fc.array(unit(2), { minLength: n - 2, maxLength: n - 2 }), { minLength: 0, maxLength: 4 }),
+          fc.tuple(
+            unit(4),
+            fc.array(unit(3), { minLength: n - 2, maxLength: n - 2 }),
+            unit(3),
+            unit(2),
+            unit(3),
+            unit(1),
+          ),
+        ),
+      );
     fc.assert(
       fc.property(rowsArb, ([layout, middles, [first, mids, last3, last2, start3, last1]]) => {
         const row1 = [first, ...mids, layout === 'tube' ? last2 : last3].join(' ');
-        const later = middles.map((m) => [start3, ...m, layout === 'tube' ? last1 : m[0] ?? last2].join(' '));
+        const later = middles.map((m) => [start3, ...m, layout === 'tube' ? last1 : (m[0] ?? last2)].join(' '));
         const ast = pattern(layout, [row1, ...later]);
         const before = compileAst(ast);
         expect(before.diagnostics.filter((d) => d.severity === 'error')).toEqual([]);

@@ -8,10 +8,14 @@ import type { Model, Place } from '../../shared/model.js';
 import { panelRows, pattern, tubeRows } from './build-ast.js';
 
 /** Colour at each place of a unit, as "far A, top B, ...", in the order given. */
-const laid = (m: Model, unit: number, places: Place[]) => places.map((p) => `${p} ${m.beads[m.units[unit]!.places[p]!]!.color}`).join(', ');
+const laid = (m: Model, unit: number, places: Place[]) =>
+  places.map((p) => `${p} ${m.beads[m.units[unit]!.places[p]!]!.color}`).join(', ');
 const pickups = (m: Model, unit: number) =>
-  m.steps[unit]!.actions.filter((a) => a.kind === 'pickup').map((a) => `${a.place} ${m.beads[a.bead]!.color}`).join(', ');
-const newBeads = (m: Model, unit: number) => m.steps[unit]!.actions.filter((a) => a.kind === 'pickup').map((a) => a.bead);
+  m.steps[unit]!.actions.filter((a) => a.kind === 'pickup')
+    .map((a) => `${a.place} ${m.beads[a.bead]!.color}`)
+    .join(', ');
+const newBeads = (m: Model, unit: number) =>
+  m.steps[unit]!.actions.filter((a) => a.kind === 'pickup').map((a) => a.bead);
 
 describe('worked check (NOTATION.md section 4)', () => {
   // Source: NOTATION.md section 4, "Worked check".
@@ -102,7 +106,8 @@ describe('the rhythm of right angle weave (common practice)', () => {
     // common practice
     for (const m of [panel, compileAst(pattern('tube', tubeRows(6, 4))).value.model]) {
       for (const row of m.rows)
-        for (let i = 1; i < row.units.length; i++) expect(m.steps[row.units[i]!]!.direction).not.toBe(m.steps[row.units[i - 1]!]!.direction);
+        for (let i = 1; i < row.units.length; i++)
+          expect(m.steps[row.units[i]!]!.direction).not.toBe(m.steps[row.units[i - 1]!]!.direction);
     }
   });
 
