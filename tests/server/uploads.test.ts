@@ -1,5 +1,5 @@
 /** Uploads: good, broken, oversized and binary files, many at once, and all-or-nothing writes. */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import request from 'supertest';
 import { login, SAMPLE, startHarness, type Harness } from './harness.js';
 
@@ -72,6 +72,29 @@ describe('uploads', () => {
     const latin1 = Buffer.from('title: Caf\xe9\n', 'latin1');
     expect((await post().attach('file', latin1, 'latin1.ffp')).status).toBe(415);
     expect(await patternCount()).toBe(before);
+  });
+
+  it('rolls back every pattern of a request when a write fails part-way', async () => {
+    const before = await patternCount();
+    const versions = await h.db.models.Version.count();
+    const create = h.db.models.Version.create.bind(h.db.models.Version);
+    let calls = 0;
+    // The database refuses the third version, as a full disk or a lost connection would.
+    const spy = vi.spyOn(h.db.models.Version, 'create').mockImplementation(((...args: Parameters<typeof create>) => {
+      if (++calls === 3) return Promise.reject(new Error('simulated write failure'));
+      return create(...args);
+    }) as typeof create);
+    try {
+      let req = post();
+      for (let i = 0; i < 4; i++) req = req.attach('file', Buffer.from(SAMPLE), `band-${i}.ffp`);
+      const res = await req;
+      expect(res.status).toBe(500);
+      expect(res.body.error).toEqual({ code: 'internal', message: 'Something went wrong on the server.', details: null });
+    } finally {
+      spy.mockRestore();
+    }
+    expect(await patternCount()).toBe(before);
+    expect(await h.db.models.Version.count()).toBe(versions);
   });
 
   it('takes pasted text as JSON and refuses other bodies', async () => {
