@@ -28,7 +28,8 @@ const goldenDir = 'tests/engine/golden';
 
 describe.runIf(examples.length > 0)('examples', () => {
   test.each(examples)('%s: model matches its golden JSON and the schema', (file) => {
-    const { value } = compile(readFileSync(join('examples', file), 'utf8'));
+    const { value, diagnostics } = compile(readFileSync(join('examples', file), 'utf8'));
+    expect(diagnostics.filter((d) => d.severity === 'error')).toEqual([]);
     expect(valid(value.model)).toEqual([]);
     const text = `${JSON.stringify(value.model, null, 1)}\n`;
     const golden = join(goldenDir, file.replace(/\.ffp$/, '.model.json'));
@@ -62,4 +63,25 @@ describe('schema', () => {
 test('a model of a pattern the parser had to recover from still validates', () => {
   // Row numbers are kept as written (here the parser recovered a row without one), so they may be 0.
   expect(valid(compile('\u0000 row row ((((\nrow 2: AAAA').value.model)).toEqual([]);
+});
+
+describe.runIf(examples.length > 0)('examples meet the closed forms of their shapes', () => {
+  // Source: NOTATION.md section 8 (panel: Weisstein, MathWorld "Grid Graph"; Euler: Levin, "Discrete Mathematics: An Open Introduction").
+  test.each(examples)('%s', (file) => {
+    const m = compile(readFileSync(join('examples', file), 'utf8')).value.model;
+    const widths = m.rows.map((r) => r.units.length);
+    const R = widths.length;
+    const euler = m.junctions.length - m.beads.length + m.units.length + m.beads.filter((b) => b.gap).length;
+    if (m.header.layout === 'tube') {
+      expect(new Set(widths).size).toBe(1);
+      expect(m.beads.length).toBe(widths[0]! * (2 * R + 1));
+      expect(euler).toBe(0);
+    } else if (m.header.layout === 'round') {
+      expect(euler).toBe(0);
+    } else {
+      expect(euler).toBe(1);
+      if (new Set(widths).size === 1) expect(m.beads.length).toBe(widths[0]! * (R + 1) + R * (widths[0]! + 1));
+      if (widths.every((w, i) => w === 2 * i + 1)) expect(m.beads.length).toBe(2 * R * R + 3 * R - 1);
+    }
+  });
 });
