@@ -107,8 +107,8 @@ const withMaterials = (cmd: Command): Command =>
         .argParser(parseLength)
         .default(150, '15cm'),
     );
-const serverOption = () =>
-  new Option('--server <url>', 'address of the viewer (default: the one saved by login)').argParser(parseUrl);
+const serverOption = (what = 'address of the viewer (default: the one saved by login)') =>
+  new Option('--server <url>', what).argParser(parseUrl);
 const portOption = (def: number) =>
   new Option('--port <port>', 'port to listen on (0 picks a free one)').argParser(integerIn(0, 65535)).default(def);
 
@@ -201,7 +201,7 @@ function define(program: Command, done: (cmd: ParsedCommand) => void): void {
     .action(finish('serve'));
 
   command('login', 'get a personal access token from a viewer and keep it for push and pull')
-    .addOption(serverOption())
+    .addOption(serverOption('address of the viewer to sign in to (default: the one used last time)'))
     .option('--token <token>', 'use this token instead of asking for e-mail and password')
     .addOption(formatOption(['text', 'json'], 'text'))
     .action(finish('login'));
@@ -252,7 +252,7 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
   define(program, (cmd) => (parsed = cmd));
   const asked = argv[0] === 'help' ? argv[1] : undefined;
   if (asked !== undefined && !program.commands.some((c) => c.name() === asked))
-    return { value: null, error: withHint(`error: unknown command '${asked}'`, []) };
+    return { value: null, error: withHint(`error: unknown command '${asked}'`) };
   try {
     program.parse([...argv], { from: 'user' });
   } catch (e) {
@@ -260,7 +260,8 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
     if (e.exitCode === 0) return { value: null, help: out };
     // No command at all: the overview is the whole answer.
     if (e.code === 'commander.help') return { value: null, error: err };
-    return { value: null, error: withHint(err || out, argv) };
+    const page = program.commands.find((c) => c.name() === argv.find((a) => !a.startsWith('-')));
+    return { value: null, error: withHint(err || out, page?.name()) };
   }
   if (parsed) return { value: parsed };
   // Only root options were given: `-V` among others, or nothing runnable.
@@ -269,8 +270,5 @@ export function parseArgs(argv: readonly string[]): ArgsResult {
 }
 
 /** Point at the right help page after a usage error. */
-function withHint(text: string, argv: readonly string[]): string {
-  const name = argv.find((a) => !a.startsWith('-'));
-  const page = name && /^[a-z]+$/.test(name) && !text.includes('unknown command') ? ` ${name}` : '';
-  return `${text.trimEnd()}\n(run 'fourfold help${page}' for usage)\n`;
-}
+const withHint = (text: string, page?: string): string =>
+  `${text.trimEnd()}\n(run 'fourfold help${page ? ` ${page}` : ''}' for usage)\n`;
