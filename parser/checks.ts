@@ -7,7 +7,7 @@
 import { fileStart, type Diagnostic, type SourceRange } from '../shared/diagnostic.js';
 import type { ItemNode, Layout, PatternAst, RowNode, UnitNode } from './ast.js';
 import { expandRow } from './expand.js';
-import { didYouMean } from './suggest.js';
+import { suggest } from './suggest.js';
 import { COLORS_KEYS, HEADER_KEYS, NOTE_KEY } from './values.js';
 
 export function checkPattern(ast: PatternAst): Diagnostic[] {
@@ -26,12 +26,14 @@ function checkKeys(ast: PatternAst, out: Diagnostic[]): void {
   const known: readonly string[] = HEADER_KEYS;
   for (const e of ast.header.entries) {
     if (known.includes(e.key)) continue;
+    const s = suggest(e.key, [...HEADER_KEYS, NOTE_KEY, ...COLORS_KEYS], e.keyRange);
     out.push({
       severity: 'warning',
       id: 'unknown-key',
-      message: `'${e.key}' is not a header key Fourfold knows; it is kept but not used.${didYouMean(e.key, [...HEADER_KEYS, NOTE_KEY, ...COLORS_KEYS])}`,
+      message: `'${e.key}' is not a header key Fourfold knows; it is kept but not used.${s.text}`,
       range: e.keyRange,
       hint: `the header keys are: ${HEADER_KEYS.join(', ')}`,
+      ...(s.fix ? { fix: s.fix } : {}),
     });
   }
 }

@@ -1,5 +1,6 @@
 /** Did-you-mean suggestions, shared by every check that meets a word it does not know. */
 import { distance } from 'fastest-levenshtein';
+import type { Fix, SourceRange } from '../shared/diagnostic.js';
 
 /**
  * The closest candidate, if it is close enough to be a plausible typo: at most
@@ -24,3 +25,9 @@ export const didYouMean = (word: string, candidates: Iterable<string>): string =
   const c = closest(word, candidates);
   return c === undefined ? '' : ` Did you mean '${c}'?`;
 };
+
+/** The did-you-mean text and, when there is a suggestion, the fix that writes it over `range`. */
+export function suggest(word: string, candidates: Iterable<string>, range: SourceRange): { text: string; fix?: Fix } {
+  const c = closest(word, candidates);
+  return c === undefined ? { text: '' } : { text: ` Did you mean '${c}'?`, fix: { title: `write '${c}'`, range, replacement: c } };
+}

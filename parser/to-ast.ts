@@ -9,7 +9,7 @@ import type { Diagnostic, Result, SourceRange } from '../shared/diagnostic.js';
 import type { ColorDef, Comment, GroupNode, HeaderEntry, ItemNode, NoteNode, PatternAst, RowNode } from './ast.js';
 import { parser } from './grammar.js';
 import type { LineIndex } from './positions.js';
-import { didYouMean } from './suggest.js';
+import { didYouMean, suggest } from './suggest.js';
 import { badColor, colorHex, COLORS_KEYS, HEADER_KEYS, NOTE_KEY, readHeader, ROW_WORDS } from './values.js';
 
 type Children = Record<string, CstElement[] | undefined>;
@@ -105,14 +105,33 @@ class AstBuilder extends BaseVisitor {
     if (!real(start)) return undefined;
     const w = start.image.toLowerCase();
     if (!(ROW_WORDS as readonly string[]).includes(w)) {
-      this.error(this.range(start), `'${start.image}' is not a word the notation knows.${didYouMean(w, ROW_WORDS)}`, "a row starts with 'row N:' or 'round N:'");
+      const range = this.range(start);
+      const s = suggest(w, ROW_WORDS, range);
+      this.diagnostics.push({
+        severity: 'error',
+        id: 'syntax',
+        message: `'${start.image}' is not a word the notation knows.${s.text}`,
+        range,
+        hint: "a row starts with 'row N:' or 'round N:'",
+        ...(s.fix ? { fix: s.fix } : {}),
+      });
     }
     const [n1, n2] = tokens(ctx, 'RowNumber').filter(real);
     const colon = tokens(ctx, 'Colon').find(real);
     let last = n2 ?? n1 ?? start;
     const label = (): string => `${start.image}${n1 ? ` ${n1.image}${n2 ? `-${n2.image}` : ''}` : ''}`;
     if (!n1) this.error(this.ix.range(endOf(start), endOf(start)), `expected a row number after '${start.image}'`, "write it like 'row 3: AB CB'");
-    if (!colon) this.error(this.ix.range(endOf(last), endOf(last)), `expected ':' after '${label()}'`, `write '${label()}: ' before the units`);
+    if (!colon) {
+      const at = this.ix.range(endOf(last), endOf(last));
+      this.diagnostics.push({
+        severity: 'error',
+        id: 'syntax',
+        message: `expected ':' after '${label()}'`,
+        range: at,
+        hint: `write '${label()}: ' before the units`,
+        fix: { title: "insert ':'", range: at, replacement: ':' },
+      });
+    }
     if (colon) last = colon;
     const items = this.items(ctx, true);
     const numberRange = n1 ? this.ix.range(n1.startOffset, endOf(n2 ?? n1)) : this.ix.range(endOf(start), endOf(start));
@@ -371,7 +390,15 @@ function colorLine(line: ColorLine, inBlock: boolean, ix: LineIndex, diagnostics
   const lower = line.word.toLowerCase();
   const known = [...HEADER_KEYS, NOTE_KEY, ...COLORS_KEYS];
   if (known.includes(lower as never)) {
-    push(line.wordRange, `expected ':' after '${line.word}'`, `write '${line.word}: ...'`);
+    const at = ix.range(line.wordRange.endOffset, line.wordRange.endOffset);
+    diagnostics.push({
+      severity: 'error',
+      id: 'syntax',
+      message: `expected ':' after '${line.word}'`,
+      range: line.wordRange,
+      hint: `write '${line.word}: ...'`,
+      fix: { title: "insert ':'", range: at, replacement: ':' },
+    });
     return undefined;
   }
   if (line.word.length > 1) {
@@ -393,7 +420,7 @@ function colorLine(line: ColorLine, inBlock: boolean, ix: LineIndex, diagnostics
     });
   }
   const text = line.text;
-  const m = /^(\s*)(\S*)(\s*)(.*?)\s*$/.exec(text)!;
+  const m = /^(\s*)(\S*)(\s*)([\s\S]*?)\s*$/.exec(text)!;
   const written = m[2]!;
   const cStart = line.textOffset + m[1]!.length;
   const colorRange = ix.range(cStart, cStart + written.length);

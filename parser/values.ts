@@ -5,7 +5,7 @@
 import { colorsNamed } from 'culori';
 import type { Diagnostic, SourceRange } from '../shared/diagnostic.js';
 import type { BeadShape, Header, HeaderEntry, KeyOrder, Layout } from './ast.js';
-import { didYouMean } from './suggest.js';
+import { suggest } from './suggest.js';
 
 /** The header keys in the order `fmt` writes them. */
 export const HEADER_KEYS = ['title', 'designer', 'beads', 'layout', 'order', 'thread', 'description', 'license'] as const;
@@ -44,24 +44,30 @@ export function badColor(key: string, written: string, range: SourceRange): Diag
       hint: "write 3 or 6 hex digits after '#', like '#2e6f8e' or '#fa0'",
     };
   }
+  const s = suggest(written, COLOR_NAMES, range);
   return {
     severity: 'error',
     id: 'bad-color',
-    message: `colour '${key}': '${written}' is not a CSS colour name.${didYouMean(written, COLOR_NAMES)}`,
+    message: `colour '${key}': '${written}' is not a CSS colour name.${s.text}`,
     range,
     hint: "use a CSS Color 4 name (like 'teal' or 'rebeccapurple') or a hex colour like '#2e6f8e'",
+    ...(s.fix ? { fix: s.fix } : {}),
   };
 }
 
 const WHAT: Record<string, string> = { beads: 'bead size and shape', layout: 'layout', order: 'key order' };
 
-const enumError = (entry: HeaderEntry, allowed: readonly string[]): Diagnostic => ({
-  severity: 'error',
-  id: 'bad-header-value',
-  message: `'${entry.value}' is not a ${WHAT[entry.key] ?? entry.key}.${didYouMean(entry.value, allowed)}`,
-  range: entry.valueRange,
-  hint: `${entry.key} is one of: ${allowed.join(', ')}`,
-});
+function enumError(entry: HeaderEntry, allowed: readonly string[]): Diagnostic {
+  const s = suggest(entry.value, allowed, entry.valueRange);
+  return {
+    severity: 'error',
+    id: 'bad-header-value',
+    message: `'${entry.value}' is not a ${WHAT[entry.key] ?? entry.key}.${s.text}`,
+    range: entry.valueRange,
+    hint: `${entry.key} is one of: ${allowed.join(', ')}`,
+    ...(s.fix ? { fix: s.fix } : {}),
+  };
+}
 
 /** The header with defaults, from the entries as written (first of a repeated key wins). */
 export function readHeader(entries: HeaderEntry[]): { header: Header; diagnostics: Diagnostic[] } {

@@ -62,6 +62,26 @@ describe('parse', () => {
   });
 });
 
+describe('inputs found by fuzzing', () => {
+  test.each([['a lone carriage return in a colour line', 'r r r\rr']])('%s', (_what, text) => {
+    expect(parse(text).diagnostics.map((d) => d.id)).not.toContain('internal');
+  });
+});
+
+describe('fixes', () => {
+  test('did-you-mean suggestions and a missing colon come with a fix', () => {
+    const text = 'title: T\nlayuot: flat\nlayout: rond\ncolors:\n  A tela\nrwo 1: AAAA\nrow 2 AAA\n';
+    const fixes = parse(text).diagnostics.flatMap((d) => (d.fix ? [[d.id, text.slice(d.fix.range.offset, d.fix.range.endOffset), d.fix.replacement]] : []));
+    expect(fixes).toEqual([
+      ['unknown-key', 'layuot', 'layout'],
+      ['bad-header-value', 'rond', 'round'],
+      ['bad-color', 'tela', 'teal'],
+      ['syntax', 'rwo', 'row'],
+      ['syntax', '', ':'],
+    ]);
+  });
+});
+
 describe('expandRow', () => {
   const row = (units: string) => parse(`${head}row 1: AAAA\nrow 2: ${units}\n`).value.rows[1]!;
 
