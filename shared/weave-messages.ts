@@ -2,7 +2,7 @@
  * The wording of the weave checks, kept apart from the net builder so the
  * builder reads as rules and the messages read as sentences.
  */
-import type { Diagnostic, Severity, SourceRange } from './diagnostic.js';
+import type { Diagnostic, Fix, Severity, SourceRange } from './diagnostic.js';
 import type { Layout, UnitNode } from '../parser/ast.js';
 import type { FlatItem } from '../parser/expand.js';
 
@@ -40,34 +40,51 @@ interface Where {
   last: boolean;
 }
 
-function suggestion(shared: number, expected: number, unit: UnitNode, where: Where): string {
+/** What would make the unit valid, in words, and as an edit where it is a mark to add or remove. */
+function suggestion(shared: number, expected: number, unit: UnitNode, where: Where): { text: string; fix?: Fix } {
   const written = unit.keys.length;
+  const r = unit.range;
+  const add = (mark: string, title: string): Fix => ({
+    title,
+    range: { ...r, endLine: r.line, endColumn: r.column, endOffset: r.offset },
+    replacement: mark,
+  });
+  const remove = (title: string): Fix => ({
+    title,
+    range: { ...r, endLine: r.line, endColumn: r.column + 1, endOffset: r.offset + 1 },
+    replacement: '',
+  });
   if (unit.mark === '' && written === expected + 1 && shared & BASE_BIT && !where.first) {
     if (where.layout === 'round' || (where.layout === 'flat' && where.last))
-      return "Mark an increase with '+' if that is meant.";
+      return { text: "Mark an increase with '+' if that is meant.", fix: add('+', "mark an increase '+'") };
   }
   if (unit.mark === '' && written === 4 && where.first && !where.firstRow && where.layout === 'flat')
-    return "Mark a fresh ring with '*' if that is meant.";
-  if (unit.mark === '+' && written === expected - 1) return "Remove the '+' if no increase is meant.";
-  if (unit.mark === '*' && written === 3) return "Remove the '*' if the unit is meant to build on the row before.";
-  return `Write ${expected} key${expected === 1 ? '' : 's'}, one for each new bead.`;
+    return { text: "Mark a fresh ring with '*' if that is meant.", fix: add('*', "mark a fresh ring '*'") };
+  if (unit.mark === '+' && written === expected - 1)
+    return { text: "Remove the '+' if no increase is meant.", fix: remove("remove the '+'") };
+  if (unit.mark === '*' && written === 3)
+    return { text: "Remove the '*' if the unit is meant to build on the row before.", fix: remove("remove the '*'") };
+  return { text: `Write ${expected} key${expected === 1 ? '' : 's'}, one for each new bead.` };
 }
 
 /** `row 4, unit 3: this unit shares its near bead and a base bead, so it takes 2 new beads; 3 are written (C C B). ...` */
-export function beadCountMessage(
+export function beadCountDiagnostic(
   row: number,
   index: number,
   shared: number,
   expected: number,
   unit: UnitNode,
   where: Where,
-): { message: string } {
+): Diagnostic {
   const written = unit.keys.length;
   const spaced = [...unit.keys].join(' ');
+  const { text, fix } = suggestion(shared, expected, unit, where);
   const message =
     `row ${row}, unit ${index}: ${sharesPhrase(shared, unit.mark, where.first, where.firstRow)}, so it takes ${expected} new bead${expected === 1 ? '' : 's'}; ` +
-    `${written} ${written === 1 ? 'is' : 'are'} written (${spaced}). ${suggestion(shared, expected, unit, where)}`;
-  return { message };
+    `${written} ${written === 1 ? 'is' : 'are'} written (${spaced}). ${text}`;
+  const d: Diagnostic = { severity: 'error', id: 'bead-count', message, range: unit.range };
+  if (fix) d.fix = fix;
+  return d;
 }
 
 /** Why a unit's mark is not allowed where it stands (NOTATION.md section 2, "Marks"), or null. */

@@ -13,7 +13,7 @@ import type { Diagnostic, Result, SourceRange } from './diagnostic.js';
 import type { Layout, KeyOrder, Mark, PatternAst, RowNode } from '../parser/ast.js';
 import { expandRow, type FlatItem } from '../parser/expand.js';
 import { UNIT_LIMIT } from '../parser/limits.js';
-import { weaveDiagnostic, beadCountMessage, misplacedMark, misplacedSkip } from './weave-messages.js';
+import { weaveDiagnostic, beadCountDiagnostic, misplacedMark, misplacedSkip } from './weave-messages.js';
 
 export const BASE = 0;
 export const FAR = 1;
@@ -248,13 +248,8 @@ class Builder {
       if (closing) shared |= 1 << FAR;
       const expected = 4 - popcount(shared);
       if (item.keys.length !== expected) {
-        const { message } = beadCountMessage(n, index, shared, expected, item, {
-          layout: w.layout,
-          first,
-          firstRow,
-          last: i === lastUnitAt,
-        });
-        this.error('bead-count', message, item.range);
+        const where = { layout: w.layout, first, firstRow, last: i === lastUnitAt };
+        this.diagnostics.push(beadCountDiagnostic(n, index, shared, expected, item, where));
         return { row, complete: false };
       }
       this.place(

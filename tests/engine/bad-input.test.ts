@@ -21,6 +21,13 @@ describe('bead-count', () => {
     expect(d!.message).toBe(
       "row 4, unit 3: this unit shares its near bead and a base bead, so it takes 2 new beads; 3 are written (C C B). Mark an increase with '+' if that is meant.",
     );
+    // The fix inserts the mark before the keys.
+    expect(d!.fix).toMatchObject({ replacement: '+', range: { line: 4, column: 8, endColumn: 8 } });
+  });
+
+  test("a fix removes a '+' that makes a unit take one bead too many", () => {
+    const [d] = only(pattern('flat', ['AAAA AAA', 'AAA +AA']));
+    expect(d!.fix).toMatchObject({ replacement: '', range: { line: 2, column: 5, endColumn: 6 } });
   });
 
   test('each shape of sharing says what it shares and what would make it valid', () => {
