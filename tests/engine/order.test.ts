@@ -3,6 +3,8 @@
  * converting and weaving again gives the same bead colours at the same places.
  */
 import { describe, expect, test } from 'vitest';
+import { readdirSync, readFileSync } from 'node:fs';
+import { join } from 'node:path';
 import fc from 'fast-check';
 import { convertOrder } from '../../shared/order.js';
 import { compile } from '../../shared/compile.js';
@@ -87,5 +89,21 @@ describe('convertOrder', () => {
     const r = convertOrder(ast, 'placed');
     expect(r.value).toBe(ast);
     expect(r.diagnostics.map((d) => d.id)).toEqual(['bead-count']);
+  });
+});
+
+describe('every example converts both ways to the identical piece', () => {
+  const files = readdirSync('examples').filter((f) => f.endsWith('.ffp'));
+  test.each(files)('%s', (file) => {
+    const text = readFileSync(join('examples', file), 'utf8');
+    const original = compile(text).value.model;
+    const other = original.header.order === 'pickup' ? 'placed' : 'pickup';
+    const converted = format(convertOrder(parse(text).value, other).value);
+    const again = compile(converted);
+    expect(again.diagnostics.filter((d) => d.severity === 'error')).toEqual([]);
+    expect(again.value.model.header.order).toBe(other);
+    expect(colours(again.value.model)).toEqual(colours(original));
+    const back = compile(format(convertOrder(parse(converted).value, original.header.order).value)).value.model;
+    expect(colours(back)).toEqual(colours(original));
   });
 });
