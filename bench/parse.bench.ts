@@ -16,7 +16,10 @@ const KEYS = 'ABCDEFGH';
 const TARGET = 1_000_000;
 
 /** A deterministic flat panel of 40 units a row, with groups, notes and comments, about `TARGET` bytes. */
-export function generatePattern(target = TARGET): { text: string; rows: { row: number; units: string[]; note: string }[] } {
+export function generatePattern(target = TARGET): {
+  text: string;
+  rows: { row: number; units: string[]; note: string }[];
+} {
   let seed = 7;
   const next = (n: number): number => {
     seed = (seed * 1103515245 + 12345) & 0x7fffffff;
@@ -35,7 +38,8 @@ export function generatePattern(target = TARGET): { text: string; rows: { row: n
   let size = head.length;
   for (let r = 1; size < target; r++) {
     const units: string[] = [];
-    for (let u = 0; u < 40; u++) units.push(Array.from({ length: r === 1 ? (u === 0 ? 4 : 3) : u === 0 ? 3 : 2 }, key).join(''));
+    for (let u = 0; u < 40; u++)
+      units.push(Array.from({ length: r === 1 ? (u === 0 ? 4 : 3) : u === 0 ? 3 : 2 }, key).join(''));
     const note = `work row ${r} with an even tension, ${next(1000)} beads in`;
     const body = `${units.slice(0, 30).join(' ')} (${units.slice(30, 35).join(' ')})x1 ${units.slice(35).join(' ')}`;
     const line = `row ${r}: ${body}  # checkpoint ${r}\nnote: ${note}`;
@@ -62,17 +66,28 @@ const bench: Bench = {
     const { text, rows } = generatePattern();
     const json = sameSizeJson(text, rows);
     const check = parse(text);
-    if (check.diagnostics.some((d) => d.severity === 'error')) throw new Error(`bench pattern has errors: ${check.diagnostics[0]!.message}`);
+    if (check.diagnostics.some((d) => d.severity === 'error'))
+      throw new Error(`bench pattern has errors: ${check.diagnostics[0]!.message}`);
     const baseline = await medianMs(() => JSON.parse(json), 9, 3);
-    const stages = await medianMs(() => {
-      const ix = new LineIndex(text);
-      const lexed = lex(text, ix);
-      return toAst(parseTokens(lexed.tokens).cst, ix, lexed.comments);
-    }, 9, 3);
+    const stages = await medianMs(
+      () => {
+        const ix = new LineIndex(text);
+        const lexed = lex(text, ix);
+        return toAst(parseTokens(lexed.tokens).cst, ix, lexed.comments);
+      },
+      9,
+      3,
+    );
     const whole = await medianMs(() => parse(text), 9, 3);
     const mb = (n: number): string => (n / 1e6).toFixed(2);
     return [
-      { name: `lex+parse+to-AST of a ${mb(text.length)} MB pattern vs JSON.parse of ${mb(json.length)} MB`, value: stages, baseline, unit: 'ms', goal: { atMost: 15 } },
+      {
+        name: `lex+parse+to-AST of a ${mb(text.length)} MB pattern vs JSON.parse of ${mb(json.length)} MB`,
+        value: stages,
+        baseline,
+        unit: 'ms',
+        goal: { atMost: 15 },
+      },
       { name: `parse() with checks of the same pattern vs JSON.parse`, value: whole, baseline, unit: 'ms' },
     ];
   },

@@ -17,7 +17,13 @@ export function checkPattern(ast: PatternAst): Diagnostic[] {
   checkRowNumbers(ast.rows, out);
   for (const row of ast.rows) checkMarks(row, ast.header.layout, out);
   if (ast.rows.length === 0) {
-    out.push({ severity: 'error', id: 'no-rows', message: 'the pattern has no rows', range: fileStart, hint: "add rows after the colours, like 'row 1: BBBB'" });
+    out.push({
+      severity: 'error',
+      id: 'no-rows',
+      message: 'the pattern has no rows',
+      range: fileStart,
+      hint: "add rows after the colours, like 'row 1: BBBB'",
+    });
   }
   return out;
 }
@@ -117,9 +123,20 @@ function checkRowNumbers(rows: readonly RowNode[], out: Diagnostic[]): void {
     }
     const label = row.from === row.to ? `${row.word} ${row.from}` : `${row.word}s ${row.from}-${row.to}`;
     if (row.to < row.from) {
-      out.push({ severity: 'error', id: 'row-number', message: `the range ${row.from}-${row.to} runs backwards`, range: r, hint: `write '${row.word}s ${row.to}-${row.from}'` });
+      out.push({
+        severity: 'error',
+        id: 'row-number',
+        message: `the range ${row.from}-${row.to} runs backwards`,
+        range: r,
+        hint: `write '${row.word}s ${row.to}-${row.from}'`,
+      });
     } else if (row.from !== expected) {
-      const why = row.from < expected ? (row.from < 1 ? 'rows are numbered from 1' : `${row.word} ${row.from} is already written above`) : `${row.word} ${expected} is missing`;
+      const why =
+        row.from < expected
+          ? row.from < 1
+            ? 'rows are numbered from 1'
+            : `${row.word} ${row.from} is already written above`
+          : `${row.word} ${expected} is missing`;
       out.push({
         severity: 'error',
         id: 'row-number',
@@ -155,18 +172,44 @@ function checkMarks(row: RowNode, layout: Layout, out: Diagnostic[]): void {
     if (item.type === 'skip') {
       if (hasRow1) report(item, "row 1 has no row below it, so it cannot skip '-'", 'remove the skip');
       else if (layout === 'flat' && p > firstUnit && p < lastUnit && firstUnit >= 0) {
-        report(item, "in a flat row a skip '-' stands only at the start or the end of the row", 'move the skip to an end of the row, or remove it');
+        report(
+          item,
+          "in a flat row a skip '-' stands only at the start or the end of the row",
+          'move the skip to an end of the row, or remove it',
+        );
       }
       return;
     }
     if (item.mark === '*') {
-      if (layout !== 'flat') report(item, `a fresh ring '*' is for flat pieces only; this pattern's layout is ${layout}`, "remove the '*' and write the unit's new beads");
-      else if (hasRow1) report(item, "row 1 starts with an unmarked unit of 4 beads; '*' starts a later row", "remove the '*'");
-      else if (p !== 0) report(item, "a fresh ring '*' can only be the first item of a row", "move it to the start of the row");
+      if (layout !== 'flat')
+        report(
+          item,
+          `a fresh ring '*' is for flat pieces only; this pattern's layout is ${layout}`,
+          "remove the '*' and write the unit's new beads",
+        );
+      else if (hasRow1)
+        report(item, "row 1 starts with an unmarked unit of 4 beads; '*' starts a later row", "remove the '*'");
+      else if (p !== 0)
+        report(item, "a fresh ring '*' can only be the first item of a row", 'move it to the start of the row');
     } else if (item.mark === '+') {
-      if (layout === 'tube') report(item, "a tube has no increases: '+' is for flat and round pieces", "remove the '+', or change the layout to round");
-      else if (p === firstUnit) report(item, "an increase '+' cannot be a row's first unit: it shares the near bead of the unit before it", "start the row with an ordinary unit");
-      else if (layout === 'flat' && p < lastPlain) report(item, "in a flat row, increases '+' stand only at the end of the row", "move the increases after the row's last ordinary unit");
+      if (layout === 'tube')
+        report(
+          item,
+          "a tube has no increases: '+' is for flat and round pieces",
+          "remove the '+', or change the layout to round",
+        );
+      else if (p === firstUnit)
+        report(
+          item,
+          "an increase '+' cannot be a row's first unit: it shares the near bead of the unit before it",
+          'start the row with an ordinary unit',
+        );
+      else if (layout === 'flat' && p < lastPlain)
+        report(
+          item,
+          "in a flat row, increases '+' stand only at the end of the row",
+          "move the increases after the row's last ordinary unit",
+        );
     }
   });
 }

@@ -20,7 +20,8 @@ export function format(ast: PatternAst): string {
   const width = Math.max(0, ...entries.map((e) => e.key.length + 2));
   if (entries.length > 0) blocks.push(entries.flatMap((e) => [...comments(e.leadingComments), headerLine(e, width)]));
   if (ast.notes.length > 0) blocks.push(ast.notes.flatMap(noteLines));
-  if (ast.colors.length > 0 || ast.colorsComments?.length) blocks.push([...comments(ast.colorsComments), 'colors:', ...colorTable(ast.colors)]);
+  if (ast.colors.length > 0 || ast.colorsComments?.length)
+    blocks.push([...comments(ast.colorsComments), 'colors:', ...colorTable(ast.colors)]);
 
   const word = ast.header.layout === 'flat' ? 'row' : 'round';
   let rows: string[] = [];
@@ -37,7 +38,8 @@ export function format(ast: PatternAst): string {
 }
 
 const commentLine = (c: Comment): string => `#${c.text.trimEnd()}`;
-const comments = (list: Comment[] | undefined, indent = ''): string[] => (list ?? []).map((c) => indent + commentLine(c));
+const comments = (list: Comment[] | undefined, indent = ''): string[] =>
+  (list ?? []).map((c) => indent + commentLine(c));
 
 /** Known keys in the documented order (a repeated key stays after its first), then the others as written. */
 function orderEntries(entries: HeaderEntry[]): HeaderEntry[] {
@@ -45,7 +47,10 @@ function orderEntries(entries: HeaderEntry[]): HeaderEntry[] {
     const i = (HEADER_KEYS as readonly string[]).indexOf(e.key);
     return i === -1 ? HEADER_KEYS.length : i;
   };
-  return entries.map((e, i) => ({ e, i })).sort((a, b) => rank(a.e) - rank(b.e) || a.i - b.i).map(({ e }) => ({ ...e, leadingComments: [...(e.leadingComments ?? [])] }));
+  return entries
+    .map((e, i) => ({ e, i }))
+    .sort((a, b) => rank(a.e) - rank(b.e) || a.i - b.i)
+    .map(({ e }) => ({ ...e, leadingComments: [...(e.leadingComments ?? [])] }));
 }
 
 function headerLine(e: HeaderEntry, width: number): string {
@@ -56,18 +61,25 @@ function headerLine(e: HeaderEntry, width: number): string {
 /** Values with a fixed vocabulary are written the one way they are documented; free text as written. */
 function canonicalValue(e: HeaderEntry): string {
   const lower = e.value.toLowerCase();
-  if (e.key === 'beads' && (BEAD_SIZES as readonly string[]).includes(normaliseBeads(e.value))) return normaliseBeads(e.value);
+  if (e.key === 'beads' && (BEAD_SIZES as readonly string[]).includes(normaliseBeads(e.value)))
+    return normaliseBeads(e.value);
   if (e.key === 'layout' && (LAYOUTS as readonly string[]).includes(lower)) return lower;
   if (e.key === 'order' && (ORDERS as readonly string[]).includes(lower)) return lower;
   return e.value;
 }
 
-const noteLines = (n: NoteNode): string[] => [...comments(n.leadingComments), n.text === '' ? 'note:' : `note: ${n.text}`];
+const noteLines = (n: NoteNode): string[] => [
+  ...comments(n.leadingComments),
+  n.text === '' ? 'note:' : `note: ${n.text}`,
+];
 
 function colorTable(colors: ColorDef[]): string[] {
   const width = Math.max(0, ...colors.map((c) => [...c.written].length));
   return colors.flatMap((c) => {
-    const line = c.name === '' ? `  ${c.key}  ${c.written}` : `  ${c.key}  ${c.written.padEnd(width + (c.written.length - [...c.written].length))}  ${c.name}`;
+    const line =
+      c.name === ''
+        ? `  ${c.key}  ${c.written}`
+        : `  ${c.key}  ${c.written.padEnd(width + (c.written.length - [...c.written].length))}  ${c.name}`;
     return [...comments(c.leadingComments, '  '), line];
   });
 }
@@ -81,6 +93,12 @@ function rowLine(row: RowNode, word: string): string {
 
 export function itemsText(items: readonly ItemNode[]): string {
   return items
-    .map((item) => (item.type === 'unit' ? item.mark + item.keys : item.type === 'skip' ? '-' : `(${itemsText(item.items)})x${item.times}`))
+    .map((item) =>
+      item.type === 'unit'
+        ? item.mark + item.keys
+        : item.type === 'skip'
+          ? '-'
+          : `(${itemsText(item.items)})x${item.times}`,
+    )
     .join(' ');
 }

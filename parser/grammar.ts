@@ -7,7 +7,21 @@
  * anything else, so one run reports every error.
  */
 import { CstParser, type CstNode, type IToken } from 'chevrotain';
-import { allTokens, BodyToken, Colon, ColorKey, Dash, HeaderKey, LineEnd, LParen, RowNumber, RowStart, RParen, Text, Times } from './tokens.js';
+import {
+  allTokens,
+  BodyToken,
+  Colon,
+  ColorKey,
+  Dash,
+  HeaderKey,
+  LineEnd,
+  LParen,
+  RowNumber,
+  RowStart,
+  RParen,
+  Text,
+  Times,
+} from './tokens.js';
 
 class PatternParser extends CstParser {
   constructor() {

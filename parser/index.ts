@@ -83,10 +83,24 @@ export function parseBytes(bytes: Uint8Array): Result<PatternAst> {
 
 const notText = (message: string): Result<PatternAst> => ({
   value: emptyAst(),
-  diagnostics: [{ severity: 'error', id: 'not-text', message, range: fileStart, hint: 'a pattern is a plain UTF-8 text file (.ffp); save it as UTF-8 from your editor' }],
+  diagnostics: [
+    {
+      severity: 'error',
+      id: 'not-text',
+      message,
+      range: fileStart,
+      hint: 'a pattern is a plain UTF-8 text file (.ffp); save it as UTF-8 from your editor',
+    },
+  ],
 });
 
 function internalError(e: unknown): Diagnostic {
   const what = e instanceof Error ? e.message : String(e);
-  return { severity: 'error', id: 'internal', message: `Fourfold could not read this file because of a fault of its own (${what})`, range: fileStart, hint: 'please report this, with the file' };
+  return {
+    severity: 'error',
+    id: 'internal',
+    message: `Fourfold could not read this file because of a fault of its own (${what})`,
+    range: fileStart,
+    hint: 'please report this, with the file',
+  };
 }

@@ -46,6 +46,7 @@ export function lex(text: string, index: LineIndex): Lexed {
 function printable(s: string): string {
   const shown = [...s].slice(0, 20).join('');
   return (
+    // eslint-disable-next-line no-control-regex -- control characters are exactly what is matched
     shown.replace(/[\u0000-\u001f\u007f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`) +
     (shown.length < s.length ? '…' : '')
   );

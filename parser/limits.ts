@@ -14,7 +14,13 @@ export const MAX_LINE = 10_000;
 export const UNIT_LIMIT = 200_000;
 export const MAX_NESTING = 16;
 
-const tooLarge = (message: string, range: Diagnostic['range'], hint: string): Diagnostic => ({ severity: 'error', id: 'too-large', message, range, hint });
+const tooLarge = (message: string, range: Diagnostic['range'], hint: string): Diagnostic => ({
+  severity: 'error',
+  id: 'too-large',
+  message,
+  range,
+  hint,
+});
 
 /** UTF-8 length without encoding the text (the core stays free of Buffer). */
 export function utf8Length(text: string): number {
@@ -28,7 +34,11 @@ export function utf8Length(text: string): number {
 
 export function sizeDiagnostic(bytes: number, ix: LineIndex): Diagnostic | undefined {
   if (bytes <= MAX_BYTES) return undefined;
-  return tooLarge(`the file is ${bytes.toLocaleString('en')} bytes; the limit is 1 MiB (${MAX_BYTES.toLocaleString('en')} bytes)`, ix.range(0, 0), 'split the pattern into smaller files');
+  return tooLarge(
+    `the file is ${bytes.toLocaleString('en')} bytes; the limit is 1 MiB (${MAX_BYTES.toLocaleString('en')} bytes)`,
+    ix.range(0, 0),
+    'split the pattern into smaller files',
+  );
 }
 
 /** Lines over the limit; the file is refused when there is any. */
@@ -68,7 +78,13 @@ export function guardNesting(tokens: IToken[], ix: LineIndex): { tokens: IToken[
     else if (name === 'LineEnd') {
       if (tooDeep) {
         kept ??= tokens.slice(0, lineStart);
-        diagnostics.push(tooLarge(`groups nest more than ${MAX_NESTING} deep; this row is left out`, ix.range(tooDeep.startOffset, tooDeep.startOffset + 1), 'write the inner groups out, or repeat fewer levels'));
+        diagnostics.push(
+          tooLarge(
+            `groups nest more than ${MAX_NESTING} deep; this row is left out`,
+            ix.range(tooDeep.startOffset, tooDeep.startOffset + 1),
+            'write the inner groups out, or repeat fewer levels',
+          ),
+        );
       } else kept?.push(...tokens.slice(lineStart, i + 1));
       lineStart = i + 1;
       depth = 0;

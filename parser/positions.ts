@@ -66,7 +66,14 @@ export class LineIndex {
     const i = a.line - 1;
     // Most ranges are one token on one line of plain text: no second search.
     if (!this.astral && endOffset >= offset && (i + 1 >= this.starts.length || endOffset < this.starts[i + 1]!)) {
-      return { line: a.line, column: a.column, endLine: a.line, endColumn: a.column + (endOffset - offset), offset, endOffset };
+      return {
+        line: a.line,
+        column: a.column,
+        endLine: a.line,
+        endColumn: a.column + (endOffset - offset),
+        offset,
+        endOffset,
+      };
     }
     const b = this.position(endOffset);
     return { line: a.line, column: a.column, endLine: b.line, endColumn: b.column, offset, endOffset };

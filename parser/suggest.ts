@@ -17,7 +17,9 @@ export function closest(word: string, candidates: Iterable<string>): string | un
       bestDistance = d;
     }
   }
-  return best !== undefined && bestDistance > 0 && bestDistance <= Math.min(2, Math.ceil(w.length / 2)) ? best : undefined;
+  return best !== undefined && bestDistance > 0 && bestDistance <= Math.min(2, Math.ceil(w.length / 2))
+    ? best
+    : undefined;
 }
 
 /** " Did you mean 'x'?" or nothing, to append to a message. */
@@ -29,5 +31,7 @@ export const didYouMean = (word: string, candidates: Iterable<string>): string =
 /** The did-you-mean text and, when there is a suggestion, the fix that writes it over `range`. */
 export function suggest(word: string, candidates: Iterable<string>, range: SourceRange): { text: string; fix?: Fix } {
   const c = closest(word, candidates);
-  return c === undefined ? { text: '' } : { text: ` Did you mean '${c}'?`, fix: { title: `write '${c}'`, range, replacement: c } };
+  return c === undefined
+    ? { text: '' }
+    : { text: ` Did you mean '${c}'?`, fix: { title: `write '${c}'`, range, replacement: c } };
 }

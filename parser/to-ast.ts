@@ -43,7 +43,8 @@ const endOf = (t: IToken): number => t.startOffset + t.image.length;
 const tokens = (ctx: Children, name: string): IToken[] => (ctx[name] as IToken[] | undefined) ?? [];
 const nodes = (ctx: Children, name: string): CstNode[] => (ctx[name] as CstNode[] | undefined) ?? [];
 /** Tokens inserted by error recovery have no text behind them. */
-const real = (t: IToken | undefined): t is IToken => t !== undefined && !t.isInsertedInRecovery && !Number.isNaN(t.startOffset);
+const real = (t: IToken | undefined): t is IToken =>
+  t !== undefined && !t.isInsertedInRecovery && !Number.isNaN(t.startOffset);
 
 const BaseVisitor = parser.getBaseCstVisitorConstructor();
 
@@ -61,7 +62,9 @@ class AstBuilder extends BaseVisitor {
   }
 
   private error(range: SourceRange, message: string, hint?: string, id = 'syntax'): void {
-    this.diagnostics.push(hint === undefined ? { severity: 'error', id, message, range } : { severity: 'error', id, message, range, hint });
+    this.diagnostics.push(
+      hint === undefined ? { severity: 'error', id, message, range } : { severity: 'error', id, message, range, hint },
+    );
   }
 
   pattern(ctx: Children): Line[] {
@@ -120,7 +123,12 @@ class AstBuilder extends BaseVisitor {
     const colon = tokens(ctx, 'Colon').find(real);
     let last = n2 ?? n1 ?? start;
     const label = (): string => `${start.image}${n1 ? ` ${n1.image}${n2 ? `-${n2.image}` : ''}` : ''}`;
-    if (!n1) this.error(this.ix.range(endOf(start), endOf(start)), `expected a row number after '${start.image}'`, "write it like 'row 3: AB CB'");
+    if (!n1)
+      this.error(
+        this.ix.range(endOf(start), endOf(start)),
+        `expected a row number after '${start.image}'`,
+        "write it like 'row 3: AB CB'",
+      );
     if (!colon) {
       const at = this.ix.range(endOf(last), endOf(last));
       this.diagnostics.push({
@@ -174,7 +182,11 @@ class AstBuilder extends BaseVisitor {
       } else if (!real(el)) continue;
       else if (el.tokenType.name === 'Units') this.units(el, items);
       else if (el.tokenType.name === 'RParen') {
-        this.error(this.range(el), "this ')' closes no group", "open the group with '(' before its units, like '(AB CB)x2'");
+        this.error(
+          this.range(el),
+          "this ')' closes no group",
+          "open the group with '(' before its units, like '(AB CB)x2'",
+        );
       } else {
         const item = this.bodyToken(el);
         if (item) items.push(item);
@@ -199,13 +211,25 @@ class AstBuilder extends BaseVisitor {
       const mark = c0 === 42 ? '*' : c0 === 43 ? '+' : '';
       if (mark !== '') k++;
       let lower = false;
-      for (let c = image.charCodeAt(k); k < n && c !== 32 && c !== 9; c = image.charCodeAt(++k)) if (c >= 97) lower = true;
+      for (let c = image.charCodeAt(k); k < n && c !== 32 && c !== 9; c = image.charCodeAt(++k))
+        if (c >= 97) lower = true;
       const offset = t.startOffset + from;
-      const range: SourceRange = { line, column: column + from, endLine: line, endColumn: column + k, offset, endOffset: t.startOffset + k };
+      const range: SourceRange = {
+        line,
+        column: column + from,
+        endLine: line,
+        endColumn: column + k,
+        offset,
+        endOffset: t.startOffset + k,
+      };
       const written = this.keysOf(image, from + mark.length, k);
       while (k < n && (image.charCodeAt(k) === 32 || image.charCodeAt(k) === 9)) k++;
       if (written === '') {
-        this.error(range, `'${mark}' needs its colour keys right after it`, `write the unit's keys with no space: '${mark}CCB'`);
+        this.error(
+          range,
+          `'${mark}' needs its colour keys right after it`,
+          `write the unit's keys with no space: '${mark}CCB'`,
+        );
         continue;
       }
       const keys = lower ? written.toUpperCase() : written;
@@ -219,7 +243,11 @@ class AstBuilder extends BaseVisitor {
         });
       }
       if (keys.length > 4) {
-        this.error(range, `'${mark}${written}' has ${keys.length} colour keys, but a unit takes 1 to 4 new beads`, 'leave a space between units');
+        this.error(
+          range,
+          `'${mark}${written}' has ${keys.length} colour keys, but a unit takes 1 to 4 new beads`,
+          'leave a space between units',
+        );
       }
       out.push({ type: 'unit', mark, keys, range });
     }
@@ -249,13 +277,21 @@ class AstBuilder extends BaseVisitor {
       case 'Dash':
         return { type: 'skip', range };
       case 'RowNumber':
-        this.error(range, `a number cannot stand among the units`, "to repeat units, put them in a group with a count: '(AB CB)x3'");
+        this.error(
+          range,
+          `a number cannot stand among the units`,
+          "to repeat units, put them in a group with a count: '(AB CB)x3'",
+        );
         return undefined;
       case 'Colon':
         this.error(range, "a row has one ':', after its number", "start a new row on its own line: 'row 4: ...'");
         return undefined;
       default:
-        this.error(range, `'${t.image}' repeats a group, but no group comes before it`, "put the units to repeat in '( )' right before the count: '(AB CB)x2'");
+        this.error(
+          range,
+          `'${t.image}' repeats a group, but no group comes before it`,
+          "put the units to repeat in '( )' right before the count: '(AB CB)x2'",
+        );
         return undefined;
     }
   }
@@ -268,11 +304,18 @@ class AstBuilder extends BaseVisitor {
     const times = tokens(ctx, 'Times').find(real);
     const openRange = this.range(open);
     let count = 1;
-    if (!close) this.error(openRange, "this group '(' is not closed", "close it with ')' and a repeat count, like '(AB CB)x2'");
-    else if (!times) this.error(this.range(close), "a group needs a repeat count after ')'", "write how many times it repeats, like ')x2'");
+    if (!close)
+      this.error(openRange, "this group '(' is not closed", "close it with ')' and a repeat count, like '(AB CB)x2'");
+    else if (!times)
+      this.error(
+        this.range(close),
+        "a group needs a repeat count after ')'",
+        "write how many times it repeats, like ')x2'",
+      );
     if (times) {
       count = Number(/\d+/.exec(times.image)![0]);
-      if (count < 1) this.error(this.range(times), 'a repeat count is at least 1', "write 'x1' or more, or leave the group out");
+      if (count < 1)
+        this.error(this.range(times), 'a repeat count is at least 1', "write 'x1' or more, or leave the group out");
     }
     if (items.length === 0) this.error(openRange, 'this group is empty', "put the units to repeat inside: '(AB CB)x2'");
     const endTok = times ?? close;
@@ -312,7 +355,10 @@ export function toAst(cst: CstNode, ix: LineIndex, commentTokens: IToken[]): Res
   const builder = new AstBuilder(ix);
   const lines = builder.visit(cst) as Line[];
   const diagnostics = builder.diagnostics;
-  const comments: Comment[] = commentTokens.map((t) => ({ text: t.image.slice(1), range: ix.range(t.startOffset, endOf(t)) }));
+  const comments: Comment[] = commentTokens.map((t) => ({
+    text: t.image.slice(1),
+    range: ix.range(t.startOffset, endOf(t)),
+  }));
   const placed = placeLines(lines, comments, ix, diagnostics);
   return { value: placed, diagnostics };
 }
@@ -356,8 +402,14 @@ function placeLines(lines: Line[], comments: Comment[], ix: LineIndex, diagnosti
         return;
       }
       if ((COLORS_KEYS as readonly string[]).includes(line.key)) {
-        if (seenRow) err(line.keyRange, "the 'colors:' block goes before the first row", 'move it up, under the header');
-        if (line.value !== '') err(line.valueRange, "nothing goes after 'colors:' on its line", "write each colour on its own line below: '  A  #2e6f8e  teal'");
+        if (seenRow)
+          err(line.keyRange, "the 'colors:' block goes before the first row", 'move it up, under the header');
+        if (line.value !== '')
+          err(
+            line.valueRange,
+            "nothing goes after 'colors:' on its line",
+            "write each colour on its own line below: '  A  #2e6f8e  teal'",
+          );
         colorsComments = [...(colorsComments ?? []), ...leading];
         inColors = true;
         return;
@@ -366,7 +418,8 @@ function placeLines(lines: Line[], comments: Comment[], ix: LineIndex, diagnosti
         err(line.keyRange, `'${line.key}:' needs its number`, `write it like '${line.key} 3: AB CB'`);
         return;
       }
-      if (seenRow) err(line.keyRange, `the header line '${line.key}:' comes after a row`, 'header lines go before the first row');
+      if (seenRow)
+        err(line.keyRange, `the header line '${line.key}:' comes after a row`, 'header lines go before the first row');
       const { key, keyRange, value, valueRange, range } = line;
       entries.push({ key, value, range, keyRange, valueRange, leadingComments: leading });
       return;
@@ -383,7 +436,12 @@ function placeLines(lines: Line[], comments: Comment[], ix: LineIndex, diagnosti
 }
 
 /** A colour line, or a word line that is not one (a header key without its ':', a stray word). */
-function colorLine(line: ColorLine, inBlock: boolean, ix: LineIndex, diagnostics: Diagnostic[]): Omit<ColorDef, 'leadingComments'> | undefined {
+function colorLine(
+  line: ColorLine,
+  inBlock: boolean,
+  ix: LineIndex,
+  diagnostics: Diagnostic[],
+): Omit<ColorDef, 'leadingComments'> | undefined {
   const push = (range: SourceRange, message: string, hint: string, id = 'syntax'): void => {
     diagnostics.push({ severity: 'error', id, message, range, hint });
   };
@@ -405,10 +463,19 @@ function colorLine(line: ColorLine, inBlock: boolean, ix: LineIndex, diagnostics
     const message = inBlock
       ? `'${line.word}' is not a colour key: a key is one capital letter A-Z`
       : `'${line.word}' is not a header key, a colour or a row.${didYouMean(lower, [...known, ...ROW_WORDS])}`;
-    push(line.wordRange, message, inBlock ? "write the colour as 'A  #2e6f8e  teal'" : "header lines look like 'title: Kestrel Fan'");
+    push(
+      line.wordRange,
+      message,
+      inBlock ? "write the colour as 'A  #2e6f8e  teal'" : "header lines look like 'title: Kestrel Fan'",
+    );
     return undefined;
   }
-  if (!inBlock) push(line.wordRange, `the colour line '${line.word}' is outside the 'colors:' block`, "put colour lines under a 'colors:' line, before the first row");
+  if (!inBlock)
+    push(
+      line.wordRange,
+      `the colour line '${line.word}' is outside the 'colors:' block`,
+      "put colour lines under a 'colors:' line, before the first row",
+    );
   const key = line.word.toUpperCase();
   if (key !== line.word) {
     diagnostics.push({
@@ -425,7 +492,13 @@ function colorLine(line: ColorLine, inBlock: boolean, ix: LineIndex, diagnostics
   const cStart = line.textOffset + m[1]!.length;
   const colorRange = ix.range(cStart, cStart + written.length);
   const hex = written === '' ? null : colorHex(written);
-  if (written === '') push(line.wordRange, `colour '${key}' has no colour`, "write a hex colour or a CSS colour name after the key: 'A  #2e6f8e  teal'", 'bad-color');
+  if (written === '')
+    push(
+      line.wordRange,
+      `colour '${key}' has no colour`,
+      "write a hex colour or a CSS colour name after the key: 'A  #2e6f8e  teal'",
+      'bad-color',
+    );
   else if (hex === null) diagnostics.push(badColor(key, written, colorRange));
   return { key, written, hex, name: m[4]!, range: line.range, keyRange: line.wordRange, colorRange };
 }

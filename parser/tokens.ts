@@ -19,7 +19,12 @@ export const Gap = createToken({ name: 'Gap', pattern: /[ \t\r\n]+/, group: Lexe
 export const Blank = createToken({ name: 'Blank', pattern: /[ \t\r]+/, group: Lexer.SKIPPED });
 
 /** `# ...` to the end of the line; collected apart from the token stream so `fmt` can keep them. */
-export const Comment = createToken({ name: 'Comment', pattern: /#[\u0000-\u0009\u000b\u000c\u000e-\uffff]*/, group: 'comments' });
+export const Comment = createToken({
+  name: 'Comment',
+  // eslint-disable-next-line no-control-regex -- every character but the line breaks, as a positive range
+  pattern: /#[\u0000-\u0009\u000b\u000c\u000e-\uffff]*/,
+  group: 'comments',
+});
 
 /** `title:`, `note:`, `colors:` and any other `word:` at the start of a line. */
 export const HeaderKey = createToken({ name: 'HeaderKey', pattern: /[A-Za-z][\w-]*[ \t]*:/, push_mode: TEXT });
@@ -38,9 +43,16 @@ export const RowStart = createToken({
 /** Any other word at the start of a line: a colour line (`A  #F4F1EA  chalk`). */
 export const ColorKey = createToken({ name: 'ColorKey', pattern: /[A-Za-z][\w-]*/, push_mode: TEXT });
 
-/** The rest of a line after a header key or colour key. */
-export const Text = createToken({ name: 'Text', pattern: /[\u0000-\u0009\u000b\u000c\u000e-\uffff]+(?:\r(?!\n)[\u0000-\u0009\u000b\u000c\u000e-\uffff]*)*/ });
-// (A positive character range rather than [^\r\n], so Chevrotain can keep its first-character optimisation.)
+/**
+ * The rest of a line after a header key or colour key. Written as a positive
+ * character range rather than [^\r\n] so Chevrotain keeps its first-character
+ * optimisation.
+ */
+export const Text = createToken({
+  name: 'Text',
+  // eslint-disable-next-line no-control-regex -- every character but the line breaks, as a positive range
+  pattern: /[\u0000-\u0009\u000b\u000c\u000e-\uffff]+(?:\r(?!\n)[\u0000-\u0009\u000b\u000c\u000e-\uffff]*)*/,
+});
 
 /** Ends a row or text line and returns to the `line` mode. */
 export const LineEnd = createToken({ name: 'LineEnd', pattern: /\r?\n/, line_breaks: true, pop_mode: true });
@@ -90,6 +102,21 @@ export const lexerDefinition: { modes: Record<string, TokenType[]>; defaultMode:
 };
 
 export const allTokens: TokenType[] = [
-  Gap, Blank, Comment, HeaderKey, RowStart, ColorKey, Text, LineEnd, Continuation,
-  BodyToken, Times, Units, Dash, RowNumber, Colon, LParen, RParen,
+  Gap,
+  Blank,
+  Comment,
+  HeaderKey,
+  RowStart,
+  ColorKey,
+  Text,
+  LineEnd,
+  Continuation,
+  BodyToken,
+  Times,
+  Units,
+  Dash,
+  RowNumber,
+  Colon,
+  LParen,
+  RParen,
 ];

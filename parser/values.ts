@@ -8,7 +8,16 @@ import type { BeadShape, Header, HeaderEntry, KeyOrder, Layout } from './ast.js'
 import { suggest } from './suggest.js';
 
 /** The header keys in the order `fmt` writes them. */
-export const HEADER_KEYS = ['title', 'designer', 'beads', 'layout', 'order', 'thread', 'description', 'license'] as const;
+export const HEADER_KEYS = [
+  'title',
+  'designer',
+  'beads',
+  'layout',
+  'order',
+  'thread',
+  'description',
+  'license',
+] as const;
 export const BEAD_SIZES = ['15/0 round', '11/0 round', '8/0 round', '6/0 round', '11/0 cylinder'] as const;
 export const LAYOUTS: readonly Layout[] = ['flat', 'tube', 'round'];
 export const ORDERS: readonly KeyOrder[] = ['pickup', 'placed'];
@@ -72,7 +81,13 @@ function enumError(entry: HeaderEntry, allowed: readonly string[]): Diagnostic {
 /** The header with defaults, from the entries as written (first of a repeated key wins). */
 export function readHeader(entries: HeaderEntry[]): { header: Header; diagnostics: Diagnostic[] } {
   const diagnostics: Diagnostic[] = [];
-  const header: Header = { title: '', beads: { size: '11/0', shape: 'round' }, layout: 'flat', order: 'pickup', entries };
+  const header: Header = {
+    title: '',
+    beads: { size: '11/0', shape: 'round' },
+    layout: 'flat',
+    order: 'pickup',
+    entries,
+  };
   const seen = new Map<string, HeaderEntry>();
   for (const entry of entries) {
     const first = seen.get(entry.key);

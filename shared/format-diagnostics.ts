@@ -31,15 +31,23 @@ export function formatDiagnostic(d: Diagnostic, source: string, file: string, op
 }
 
 /** Every diagnostic of one file, separated by blank lines, ending in a newline (or empty). */
-export function formatDiagnostics(diagnostics: readonly Diagnostic[], source: string, file: string, options: FormatOptions = {}): string {
+export function formatDiagnostics(
+  diagnostics: readonly Diagnostic[],
+  source: string,
+  file: string,
+  options: FormatOptions = {},
+): string {
   const lines = source.split('\n');
   return diagnostics.map((d) => formatOne(d, lines, file, options) + '\n').join('\n');
 }
 
 function formatOne(d: Diagnostic, lines: readonly string[], file: string, options: FormatOptions): string {
-  const paint = (style: keyof typeof ANSI, s: string): string => (options.color ? `${ANSI[style]}${s}${ANSI.reset}` : s);
+  const paint = (style: keyof typeof ANSI, s: string): string =>
+    options.color ? `${ANSI[style]}${s}${ANSI.reset}` : s;
   const r = d.range;
-  const out = [`${paint('bold', `${file}:${r.line}:${r.column}:`)} ${paint(d.severity, `${d.severity}[${d.id}]`)}: ${d.message}`];
+  const out = [
+    `${paint('bold', `${file}:${r.line}:${r.column}:`)} ${paint(d.severity, `${d.severity}[${d.id}]`)}: ${d.message}`,
+  ];
   const frame = codeFrame(d, lines, options.color === true);
   if (frame !== '') out.push(frame);
   if (d.hint) out.push(`${paint('dim', 'hint:')} ${d.hint}`);
@@ -84,6 +92,7 @@ function codeFrame(d: Diagnostic, lines: readonly string[], color: boolean): str
 
 function clip(cps: string[], from: number): string {
   const cut = cps.slice(from, from + WINDOW).join('');
+  // eslint-disable-next-line no-control-regex -- control characters are exactly what is matched
   const visible = cut.replace(/[\u0000-\u0008\u000b-\u001f\u007f]/g, '\ufffd');
   return (from > 0 ? '…' : '') + visible + (cps.length > from + WINDOW ? '…' : '');
 }

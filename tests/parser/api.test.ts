@@ -71,7 +71,9 @@ describe('inputs found by fuzzing', () => {
 describe('fixes', () => {
   test('did-you-mean suggestions and a missing colon come with a fix', () => {
     const text = 'title: T\nlayuot: flat\nlayout: rond\ncolors:\n  A tela\nrwo 1: AAAA\nrow 2 AAA\n';
-    const fixes = parse(text).diagnostics.flatMap((d) => (d.fix ? [[d.id, text.slice(d.fix.range.offset, d.fix.range.endOffset), d.fix.replacement]] : []));
+    const fixes = parse(text).diagnostics.flatMap((d) =>
+      d.fix ? [[d.id, text.slice(d.fix.range.offset, d.fix.range.endOffset), d.fix.replacement]] : [],
+    );
     expect(fixes).toEqual([
       ['unknown-key', 'layuot', 'layout'],
       ['bad-header-value', 'rond', 'round'],
@@ -88,7 +90,16 @@ describe('expandRow', () => {
   test('expands groups and nested repeats in order, keeping the written nodes', () => {
     const r = row('AB ((BA)x2 -)x2 +BBB');
     const flat = expandRow(r).value;
-    expect(flat.map((i) => (i.type === 'unit' ? i.mark + i.keys : '-'))).toEqual(['AB', 'BA', 'BA', '-', 'BA', 'BA', '-', '+BBB']);
+    expect(flat.map((i) => (i.type === 'unit' ? i.mark + i.keys : '-'))).toEqual([
+      'AB',
+      'BA',
+      'BA',
+      '-',
+      'BA',
+      'BA',
+      '-',
+      '+BBB',
+    ]);
     // The same written unit stands for each repetition, so its range points at the text.
     expect(flat[1]).toBe(flat[4]);
     expect(flat[1]!.range.column).toBe(13); // 'row 2: AB ((' is 12 columns

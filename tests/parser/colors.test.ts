@@ -7,7 +7,8 @@ import colorNames from 'color-name';
 import { describe, expect, test } from 'vitest';
 import { parse } from '../../parser/index.js';
 
-const hex = ([r, g, b]: readonly number[]): string => '#' + [r, g, b].map((n) => n!.toString(16).padStart(2, '0')).join('');
+const hex = ([r, g, b]: readonly number[]): string =>
+  '#' + [r, g, b].map((n) => n!.toString(16).padStart(2, '0')).join('');
 const paletteOf = (colour: string) => parse(`title: C\ncolors:\n  A ${colour}\nrow 1: AAAA\n`);
 
 describe('CSS Color 4 names (reference: color-name)', () => {
@@ -28,7 +29,18 @@ describe('CSS Color 4 names (reference: color-name)', () => {
   test('nothing else is accepted as a name', () => {
     const known = new Set(names.map(([n]) => n));
     // Near misses, other specs' keywords and CSS words that are not named colours.
-    for (const word of ['transparent', 'currentcolor', 'grey50', 'tela', 'rebeccapurpl', 'bluegreen', 'darkgrey2', 'none', 'inherit', 'x']) {
+    for (const word of [
+      'transparent',
+      'currentcolor',
+      'grey50',
+      'tela',
+      'rebeccapurpl',
+      'bluegreen',
+      'darkgrey2',
+      'none',
+      'inherit',
+      'x',
+    ]) {
       expect(known.has(word)).toBe(false);
       const r = paletteOf(word);
       expect(r.value.colors[0]!.hex).toBeNull();

@@ -11,7 +11,10 @@ import { formatDiagnostics } from '../../shared/format-diagnostics.js';
 
 const dir = join(import.meta.dirname, 'fixtures');
 const update = process.env.UPDATE_GOLDEN === '1';
-const ffp = (sub: string): string[] => readdirSync(join(dir, sub)).filter((f) => f.endsWith('.ffp')).sort();
+const ffp = (sub: string): string[] =>
+  readdirSync(join(dir, sub))
+    .filter((f) => f.endsWith('.ffp'))
+    .sort();
 
 function golden(path: string, actual: string): void {
   if (update || !existsSync(path)) writeFileSync(path, actual);
@@ -34,12 +37,30 @@ describe('error fixtures', () => {
     const r = parseBytes(bytes);
     expect(r.diagnostics.some((d) => d.severity === 'error')).toBe(true);
     for (const d of r.diagnostics) errorIds.add(d.id);
-    golden(join(dir, 'errors', name.replace(/\.ffp$/, '.txt')), formatDiagnostics(r.diagnostics, bytes.toString('utf8'), name));
+    golden(
+      join(dir, 'errors', name.replace(/\.ffp$/, '.txt')),
+      formatDiagnostics(r.diagnostics, bytes.toString('utf8'), name),
+    );
   });
 
   test('every diagnostic id the parser emits is covered by a fixture', () => {
     // `internal` is the safety net for a fault of the parser itself and cannot be provoked by input.
-    const ids = ['syntax', 'bad-color', 'bad-header-value', 'missing-title', 'duplicate-key', 'unknown-color', 'unused-color', 'duplicate-color', 'row-number', 'unknown-key', 'misplaced-mark', 'no-rows', 'too-large', 'not-text'];
+    const ids = [
+      'syntax',
+      'bad-color',
+      'bad-header-value',
+      'missing-title',
+      'duplicate-key',
+      'unknown-color',
+      'unused-color',
+      'duplicate-color',
+      'row-number',
+      'unknown-key',
+      'misplaced-mark',
+      'no-rows',
+      'too-large',
+      'not-text',
+    ];
     expect([...errorIds].sort()).toEqual(ids.sort());
   });
 });

@@ -22,12 +22,16 @@ const plain = (beads: number): Spec => ({ mark: '', beads });
 
 /** Flat rows: row 1 is 4, 3, 3...; later rows 3, 2, 2... */
 const panelRows = (width: number, rows: number): Spec[][] =>
-  Array.from({ length: rows }, (_, r) => Array.from({ length: width }, (_, u) => plain(r === 0 ? (u === 0 ? 4 : 3) : u === 0 ? 3 : 2)));
+  Array.from({ length: rows }, (_, r) =>
+    Array.from({ length: width }, (_, u) => plain(r === 0 ? (u === 0 ? 4 : 3) : u === 0 ? 3 : 2)),
+  );
 
 /** A fan: row r has a fresh ring, 2r - 3 ordinary units and an increase. */
 const fanRows = (rows: number): Spec[][] =>
   Array.from({ length: rows }, (_, r) =>
-    r === 0 ? [plain(4)] : [{ mark: '*', beads: 4 }, ...Array.from({ length: 2 * r - 1 }, () => plain(2)), { mark: '+', beads: 3 }],
+    r === 0
+      ? [plain(4)]
+      : [{ mark: '*', beads: 4 }, ...Array.from({ length: 2 * r - 1 }, () => plain(2)), { mark: '+', beads: 3 }],
   );
 
 /**
@@ -54,23 +58,38 @@ function closedRows(first: number, increases: number[][]): Spec[][] {
 }
 
 const specsArb: fc.Arbitrary<{ kind: Kind; rows: Spec[][] }> = fc.oneof(
-  fc.record({ w: fc.integer({ min: 1, max: 7 }), r: fc.integer({ min: 1, max: 7 }) }).map(({ w, r }) => ({ kind: 'panel' as const, rows: panelRows(w, r) })),
-  fc.integer({ min: 1, max: 6 }).map((r) => ({ kind: 'fan' as const, rows: fanRows(r) })),
-  fc.record({ c: fc.integer({ min: 3, max: 8 }), r: fc.integer({ min: 0, max: 5 }) }).map(({ c, r }) => ({ kind: 'tube' as const, rows: closedRows(c, Array.from({ length: r }, () => [])) })),
   fc
-    .record({ c: fc.integer({ min: 3, max: 8 }), incs: fc.array(fc.array(fc.integer({ min: 1, max: 12 }), { maxLength: 7 }), { maxLength: 4 }) })
+    .record({ w: fc.integer({ min: 1, max: 7 }), r: fc.integer({ min: 1, max: 7 }) })
+    .map(({ w, r }) => ({ kind: 'panel' as const, rows: panelRows(w, r) })),
+  fc.integer({ min: 1, max: 6 }).map((r) => ({ kind: 'fan' as const, rows: fanRows(r) })),
+  fc.record({ c: fc.integer({ min: 3, max: 8 }), r: fc.integer({ min: 0, max: 5 }) }).map(({ c, r }) => ({
+    kind: 'tube' as const,
+    rows: closedRows(
+      c,
+      Array.from({ length: r }, () => []),
+    ),
+  })),
+  fc
+    .record({
+      c: fc.integer({ min: 3, max: 8 }),
+      incs: fc.array(fc.array(fc.integer({ min: 1, max: 12 }), { maxLength: 7 }), { maxLength: 4 }),
+    })
     .map(({ c, incs }) => ({ kind: 'round' as const, rows: closedRows(c, incs) })),
 );
 
 /** Units written as text, with repeats folded into groups (sometimes nested) where a coin says so. */
 function writeUnits(units: string[], coins: () => boolean): string[] {
   const out: string[] = [];
-  for (let i = 0; i < units.length; ) {
+  for (let i = 0; i < units.length;) {
     let folded = false;
     for (const size of [2, 1]) {
       let times = 1;
       const seg = units.slice(i, i + size).join(' ');
-      while (i + (times + 1) * size <= units.length && units.slice(i + times * size, i + (times + 1) * size).join(' ') === seg) times++;
+      while (
+        i + (times + 1) * size <= units.length &&
+        units.slice(i + times * size, i + (times + 1) * size).join(' ') === seg
+      )
+        times++;
       if (seg !== '' && times >= 2 && coins()) {
         out.push(coins() ? `((${seg})x${times})x1` : `(${seg})x${times}`);
         i += size * times;
@@ -104,15 +123,22 @@ export const patternArb: fc.Arbitrary<string> = fc
     for (const n of notes) lines.push(`note: ${n}`);
     lines.push('colors:', ...[...keys].map((c, i) => `  ${c}  ${COLOURS[i]}`));
     const word = coins() ? 'row' : 'round';
-    const written = specs.rows.map((row) => writeUnits(row.map((s) => s.mark + Array.from({ length: s.beads }, (_, b) => key(b)).join('')), coins));
-    for (let r = 0; r < written.length; ) {
+    const written = specs.rows.map((row) =>
+      writeUnits(
+        row.map((s) => s.mark + Array.from({ length: s.beads }, (_, b) => key(b)).join('')),
+        coins,
+      ),
+    );
+    for (let r = 0; r < written.length;) {
       let to = r;
       while (to + 1 < written.length && written[to + 1]!.join(' ') === written[r]!.join(' ') && r > 0) to++;
       if (rnd(4) === 0) lines.push(`# before row ${r + 1}`);
       const label = to > r ? `${word}s ${r + 1}-${to + 1}` : `${word} ${r + 1}`;
       const items = written[r]!;
       const cut = items.length > 2 && coins() ? 1 + rnd(items.length - 1) : items.length;
-      lines.push(`${label}: ${items.slice(0, cut).join(' ')}${cut === items.length && rnd(4) === 0 ? '  # trailing' : ''}`);
+      lines.push(
+        `${label}: ${items.slice(0, cut).join(' ')}${cut === items.length && rnd(4) === 0 ? '  # trailing' : ''}`,
+      );
       if (cut < items.length) lines.push(`   ${items.slice(cut).join(' ')}`);
       if (rnd(5) === 0) lines.push(`note: row note ${r + 1}`);
       r = to + 1;

@@ -6,12 +6,28 @@
  */
 import type { PatternAst } from '../../parser/index.js';
 
-const POSITIONAL = new Set(['range', 'keyRange', 'valueRange', 'colorRange', 'numberRange', 'leadingComments', 'trailingComment', 'headComments', 'colorsComments', 'tailComments', 'word']);
+const POSITIONAL = new Set([
+  'range',
+  'keyRange',
+  'valueRange',
+  'colorRange',
+  'numberRange',
+  'leadingComments',
+  'trailingComment',
+  'headComments',
+  'colorsComments',
+  'tailComments',
+  'word',
+]);
 
 function strip(v: unknown): unknown {
   if (Array.isArray(v)) return v.map(strip);
   if (v === null || typeof v !== 'object') return v;
-  return Object.fromEntries(Object.entries(v).filter(([k]) => !POSITIONAL.has(k)).map(([k, x]) => [k, strip(x)]));
+  return Object.fromEntries(
+    Object.entries(v)
+      .filter(([k]) => !POSITIONAL.has(k))
+      .map(([k, x]) => [k, strip(x)]),
+  );
 }
 
 export function normalise(ast: PatternAst): unknown {

@@ -60,7 +60,9 @@ function wellFormed(text: string, r: ReturnType<typeof parse>): void {
 describe('arbitrary input', () => {
   test('arbitrary strings never make parse throw', () => {
     fc.assert(
-      fc.property(fc.oneof(fc.string({ unit: 'binary', maxLength: 200 }), notationish), (text) => wellFormed(text, parse(text))),
+      fc.property(fc.oneof(fc.string({ unit: 'binary', maxLength: 200 }), notationish), (text) =>
+        wellFormed(text, parse(text)),
+      ),
       { numRuns: 400 },
     );
   });

@@ -10,8 +10,12 @@ import { normalise } from './normalise.js';
 
 const root = join(import.meta.dirname, '..', '..');
 const files = [
-  ...readdirSync(join(root, 'tests/parser/fixtures/good')).filter((f) => f.endsWith('.ffp')).map((f) => join(root, 'tests/parser/fixtures/good', f)),
-  ...readdirSync(join(root, 'examples')).filter((f) => f.endsWith('.ffp')).map((f) => join(root, 'examples', f)),
+  ...readdirSync(join(root, 'tests/parser/fixtures/good'))
+    .filter((f) => f.endsWith('.ffp'))
+    .map((f) => join(root, 'tests/parser/fixtures/good', f)),
+  ...readdirSync(join(root, 'examples'))
+    .filter((f) => f.endsWith('.ffp'))
+    .map((f) => join(root, 'examples', f)),
 ];
 
 describe('round trip', () => {
