@@ -146,7 +146,7 @@ class Sim {
       if (at !== e0 && at !== e1) {
         // After a skip the shared beads of a unit do not meet: the thread crosses the bead passed over.
         const entry = u.corners[dir === 1 ? p : (p + 3) % 4] === e0 ? e1 : e0;
-        const bridge = findRoute(this.net, at, last, entry, 4) ?? [];
+        const bridge = findRoute(this.net, at, last, entry, PASSAGE_LIMIT) ?? [];
         for (const b of bridge) {
           const out = ends[2 * b] === at ? ends[2 * b + 1]! : ends[2 * b]!;
           if (record) {

@@ -3,6 +3,7 @@
  * orders, and the rhythm beaders know from working right angle weave.
  */
 import { describe, expect, test } from 'vitest';
+import fc from 'fast-check';
 import { compileAst } from '../../shared/weave-model.js';
 import type { Model, Place } from '../../shared/model.js';
 import { panelRows, pattern, tubeRows } from './build-ast.js';
@@ -153,4 +154,27 @@ describe('decreases in closed rows', () => {
     expect(m.units.filter((u) => u.row === 3).some((u) => Object.values(u.places).includes(skipped))).toBe(false);
     expect(m.thread.some((p) => p.bead === skipped && m.units[p.unit]!.row === 3)).toBe(true);
   });
+});
+
+test('random decreases in tubes and rounds weave cleanly and the thread never jumps', () => {
+  // A closed row over c base beads: each unit takes one, each skip passes one, the last unit closes the row.
+  const rowArb = fc.integer({ min: 4, max: 9 }).chain((c) =>
+    fc.tuple(
+      fc.constant(c),
+      fc.constantFrom('tube' as const, 'round' as const),
+      fc.array(fc.boolean(), { minLength: c, maxLength: c }).filter((skips) => skips.filter((s) => !s).length >= 2),
+    ),
+  );
+  fc.assert(
+    fc.property(rowArb, ([c, layout, skips]) => {
+      const units = skips.filter((s) => !s).length;
+      let seen = 0;
+      const row2 = skips.map((skip) => (skip ? '-' : ++seen === 1 ? 'AAA' : seen === units ? 'A' : 'AA')).join(' ');
+      const { value, diagnostics } = compileAst(pattern(layout, [tubeRows(c, 1)[0]!, row2]));
+      expect(diagnostics).toEqual([]);
+      const m = value.model;
+      for (let i = 1; i < m.thread.length; i++) expect(m.thread[i]!.from).toBe(m.thread[i - 1]!.to);
+      for (const p of m.thread) expect(new Set(m.beads[p.bead]!.junctions)).toEqual(new Set([p.from, p.to]));
+    }),
+  );
 });
