@@ -39,8 +39,8 @@ interface Row {
 const SORT_COLUMN = { updated: 'p.updatedAt', title: 'p.title', beads: 'p.beads' } as const;
 const likeEscape = (text: string): string => text.replace(/[\\%_]/g, (c) => `\\${c}`);
 
-/** Own patterns for a designer, invited ones for a tester, all for an admin. */
-function visibility(ctx: AuthContext): { sql: string; params: unknown[] } {
+/** Own patterns for a designer, invited ones for a tester, all for an admin: the one SQL form of the rule in access.ts. */
+export function visibility(ctx: AuthContext): { sql: string; params: unknown[] } {
   const { role, id } = ctx.user;
   if (role === 'admin') return { sql: '1 = 1', params: [] };
   if (role === 'designer') return { sql: 'p.ownerId = ?', params: [id] };
@@ -74,4 +74,19 @@ export async function listPatterns(db: Db, ctx: AuthContext, query: LibraryQuery
     ),
   );
   return { items, total: Number(counted[0]?.n ?? 0), page: query.page, pageSize: query.pageSize };
+}
+
+/**
+ * The id of a version the caller may see (the current one unless `number` is
+ * given), in one query: what the chart and other views need before anything
+ * is rendered. `ctx` null means the pattern came from a valid share link.
+ */
+export async function viewableVersionId(db: Db, ctx: AuthContext | null, patternId: number, number?: number): Promise<number | null> {
+  const seen = ctx ? visibility(ctx) : { sql: '1 = 1', params: [] };
+  const rows = await db.sequelize.query<{ id: number }>(
+    `SELECT v.id FROM patterns p JOIN versions v ON v.patternId = p.id AND v.number = COALESCE(?, p.currentVersion)
+     WHERE p.id = ? AND (${seen.sql})`,
+    { replacements: [number ?? null, patternId, ...seen.params], type: QueryTypes.SELECT },
+  );
+  return rows[0]?.id ?? null;
 }

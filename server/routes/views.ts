@@ -5,10 +5,11 @@
 import { Router, type Response } from 'express';
 import { z } from 'zod';
 import type { AppDeps } from '../context.js';
-import { auth } from '../auth.js';
-import { findVersion, sharingOf, visiblePattern } from '../access.js';
+import { auth, type AuthContext } from '../auth.js';
+import { findVersion, sharingOf } from '../access.js';
+import { notFound } from '../errors.js';
+import { viewableVersionId } from '../library.js';
 import type { Model } from '../../shared/model.js';
-import type { PatternInstance } from '../models/pattern.js';
 import type { Render, ViewKind } from '../render.js';
 import { toDetail } from '../serialize.js';
 import { check, idParams, versionQuery } from '../validate.js';
@@ -18,16 +19,19 @@ const VIEWS: ViewKind[] = ['chart.svg', 'chart.png', 'tally', 'steps', 'kit', 'm
 const SHARED_VIEWS: ViewKind[] = ['chart.svg', 'chart.png', 'tally', 'steps'];
 const sharedParams = z.object({ token: z.string().max(100) });
 
-async function send(res: Response, deps: AppDeps, render: Render, pattern: PatternInstance, kind: ViewKind, query: Record<string, unknown>) {
+/**
+ * Sends one view. A pattern the caller may not see and a version that does
+ * not exist are both 404; the model is read only when the view is not cached.
+ */
+async function send(res: Response, deps: AppDeps, render: Render, ctx: AuthContext | null, patternId: number, kind: ViewKind, query: Record<string, unknown>) {
   const { version } = check(versionQuery, { version: query.version });
-  const { Version } = deps.db.models;
-  const shown = await findVersion(deps.db.models, pattern, version, ['id', 'number']);
-  // The model text is read only when the chart is not already rendered.
+  const versionId = await viewableVersionId(deps.db, ctx, patternId, version);
+  if (versionId === null) throw notFound(version ? 'No such pattern or version.' : 'No such pattern.');
   const loadModel = async () => {
-    const row = await Version.findByPk(shown.id, { attributes: ['model'] });
+    const row = await deps.db.models.Version.findByPk(versionId, { attributes: ['model'] });
     return row?.model ? (JSON.parse(row.model) as Model) : null;
   };
-  const out = await render(kind, shown.id, loadModel, query);
+  const out = await render(kind, versionId, loadModel, query);
   if (/^(image\/svg|text\/html)/.test(out.type)) {
     // A chart or a printable page is shown, never a document that may run script with the API's rights.
     res.setHeader('Content-Security-Policy', 'sandbox');
@@ -38,13 +42,11 @@ async function send(res: Response, deps: AppDeps, render: Render, pattern: Patte
 }
 
 export function viewRoutes(deps: AppDeps, render: Render): Router {
-  const { models } = deps.db;
   const router = Router();
   for (const kind of VIEWS) {
     router.get(`/:id/${kind}`, async (req, res) => {
       const { id } = check(idParams, req.params);
-      const { pattern } = await visiblePattern(models, auth(res), id);
-      await send(res, deps, render, pattern, kind, req.query as Record<string, unknown>);
+      await send(res, deps, render, auth(res), id, kind, req.query as Record<string, unknown>);
     });
   }
   return router;
@@ -67,7 +69,7 @@ export function sharedRoutes(deps: AppDeps, render: Render): Router {
   for (const kind of SHARED_VIEWS) {
     router.get(`/:token/${kind}`, async (req, res) => {
       const { token } = check(sharedParams, req.params);
-      await send(res, deps, render, await sharedPattern(token), kind, req.query as Record<string, unknown>);
+      await send(res, deps, render, null, await sharedPatternId(deps, token), kind, req.query as Record<string, unknown>);
     });
   }
   return router;
