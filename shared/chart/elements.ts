@@ -8,11 +8,18 @@
 import { round2 } from './geometry.js';
 import type { BeadPrim, DataAttrs, HatchPattern, PathPrim, Primitive, RectPrim, Scene, TextPrim } from './scene-types.js';
 
-/** What an emitter does with the walk: open an element, set attributes, add text, close it. */
+/** An attribute value; undefined leaves the attribute out. */
+export type AttrValue = string | number | undefined;
+
+/**
+ * What an emitter does with the walk. `element` is one whole element with
+ * its attributes (names from a fixed list per kind of element, values in
+ * the same order) and optional text; `open`/`close` wrap elements that hold
+ * others. Whole elements keep the text emitter to one string per element.
+ */
 export interface SvgSink {
-  open(tag: string): void;
-  attr(name: string, value: string | number): void;
-  text(text: string): void;
+  element(tag: string, names: readonly string[], values: readonly AttrValue[], text?: string): void;
+  open(tag: string, names: readonly string[], values: readonly AttrValue[]): void;
   close(tag: string): void;
 }
 
@@ -40,85 +47,66 @@ export interface EmbeddedFont {
   base64: string;
 }
 
-function dataAttrs(sink: SvgSink, data: DataAttrs): void {
-  if (data.unit !== undefined) sink.attr('data-unit', data.unit);
-  if (data.row !== undefined) sink.attr('data-row', data.row);
-  if (data.pass !== undefined) sink.attr('data-pass', data.pass);
-  if (data.kind !== undefined) sink.attr('data-kind', data.kind);
-  if (data.key !== undefined) sink.attr('data-key', data.key);
-}
+const DATA_NAMES = ['data-unit', 'data-row', 'data-pass', 'data-kind', 'data-key'] as const;
+const dataValues = (d: DataAttrs): AttrValue[] => [d.unit, d.row, d.pass, d.kind, d.key];
 
 type TextFields = Pick<TextPrim, 'id' | 'x' | 'y' | 'size' | 'text' | 'color' | 'anchor' | 'bold'>;
 
+const TEXT_NAMES = ['id', 'class', 'x', 'y', 'font-size', 'fill', 'text-anchor', 'font-weight', ...DATA_NAMES];
+
 function text(sink: SvgSink, p: TextFields, cls: string, data: DataAttrs | null): void {
-  sink.open('text');
-  sink.attr('id', p.id);
-  sink.attr('class', cls);
-  sink.attr('x', p.x);
-  sink.attr('y', p.y);
-  sink.attr('font-size', p.size);
-  sink.attr('fill', p.color);
-  if (p.anchor !== 'start') sink.attr('text-anchor', p.anchor);
-  if (p.bold) sink.attr('font-weight', 'bold');
-  if (data) dataAttrs(sink, data);
-  sink.text(p.text);
-  sink.close('text');
+  const values: AttrValue[] = [p.id, cls, p.x, p.y, p.size, p.color, p.anchor === 'start' ? undefined : p.anchor, p.bold ? 'bold' : undefined];
+  sink.element('text', TEXT_NAMES, data ? values.concat(dataValues(data)) : values, p.text);
 }
 
+const BEAD_NAMES = ['id', 'class', 'x', 'y', 'width', 'height', 'rx', 'transform', 'fill', 'stroke', 'stroke-width', 'data-bead', 'data-unit', 'data-row'];
+
 function bead(sink: SvgSink, p: BeadPrim): void {
-  sink.open('rect');
-  sink.attr('id', p.id);
-  sink.attr('class', p.gap ? 'ff-bead ff-gap' : 'ff-bead');
-  sink.attr('x', round2(p.x - p.length / 2));
-  sink.attr('y', round2(p.y - p.thickness / 2));
-  sink.attr('width', p.length);
-  sink.attr('height', p.thickness);
-  sink.attr('rx', round2(Math.min(p.thickness, p.length) / 2));
-  if (p.angle !== 0) sink.attr('transform', `rotate(${p.angle} ${p.x} ${p.y})`);
-  sink.attr('fill', p.fill);
-  sink.attr('stroke', p.stroke);
-  sink.attr('stroke-width', p.strokeWidth);
-  sink.attr('data-bead', p.bead);
-  sink.attr('data-unit', p.unit);
-  sink.attr('data-row', p.row);
-  sink.close('rect');
+  sink.element('rect', BEAD_NAMES, [
+    p.id,
+    p.gap ? 'ff-bead ff-gap' : 'ff-bead',
+    round2(p.x - p.length / 2),
+    round2(p.y - p.thickness / 2),
+    p.length,
+    p.thickness,
+    round2(Math.min(p.thickness, p.length) / 2),
+    p.angle === 0 ? undefined : `rotate(${formatNumber(p.angle)} ${formatNumber(p.x)} ${formatNumber(p.y)})`,
+    p.fill,
+    p.stroke,
+    p.strokeWidth,
+    p.bead,
+    p.unit,
+    p.row,
+  ]);
   if (p.label) {
     const { label } = p;
     text(sink, { id: `${p.id}-key`, x: label.x, y: label.y, size: label.size, text: label.text, color: label.color, anchor: 'middle', bold: true }, 'ff-bead-label', null);
   }
 }
 
-function stroke(sink: SvgSink, color: string | null, width: number): void {
-  if (color === null) return;
-  sink.attr('stroke', color);
-  sink.attr('stroke-width', width);
-}
+const RECT_NAMES = ['id', 'class', 'x', 'y', 'width', 'height', 'fill', 'stroke', 'stroke-width', ...DATA_NAMES];
 
 function rect(sink: SvgSink, p: RectPrim): void {
-  sink.open('rect');
-  sink.attr('id', p.id);
-  sink.attr('class', `ff-${p.role}`);
-  sink.attr('x', p.x);
-  sink.attr('y', p.y);
-  sink.attr('width', p.width);
-  sink.attr('height', p.height);
-  sink.attr('fill', typeof p.fill === 'string' ? p.fill : `url(#${p.fill.pattern})`);
-  stroke(sink, p.stroke, p.strokeWidth);
-  dataAttrs(sink, p.data);
-  sink.close('rect');
+  const fill = typeof p.fill === 'string' ? p.fill : `url(#${p.fill.pattern})`;
+  const stroke = p.stroke ?? undefined;
+  sink.element('rect', RECT_NAMES, [p.id, `ff-${p.role}`, p.x, p.y, p.width, p.height, fill, stroke, stroke === undefined ? undefined : p.strokeWidth, ...dataValues(p.data)]);
 }
 
+const PATH_NAMES = ['id', 'class', 'd', 'fill', 'stroke', 'stroke-width', 'stroke-dasharray', 'stroke-linecap', ...DATA_NAMES];
+
 function path(sink: SvgSink, p: PathPrim): void {
-  sink.open('path');
-  sink.attr('id', p.id);
-  sink.attr('class', `ff-${p.role}`);
-  sink.attr('d', p.d);
-  sink.attr('fill', p.fill ?? 'none');
-  stroke(sink, p.stroke, p.strokeWidth);
-  if (p.dash !== undefined) sink.attr('stroke-dasharray', p.dash);
-  if (p.stroke !== null && p.fill === null) sink.attr('stroke-linecap', 'round');
-  dataAttrs(sink, p.data);
-  sink.close('path');
+  const stroke = p.stroke ?? undefined;
+  sink.element('path', PATH_NAMES, [
+    p.id,
+    `ff-${p.role}`,
+    p.d,
+    p.fill ?? 'none',
+    stroke,
+    stroke === undefined ? undefined : p.strokeWidth,
+    p.dash,
+    stroke !== undefined && p.fill === null ? 'round' : undefined,
+    ...dataValues(p.data),
+  ]);
 }
 
 function primitive(sink: SvgSink, p: Primitive): void {
@@ -134,49 +122,41 @@ function primitive(sink: SvgSink, p: Primitive): void {
   }
 }
 
+const PATTERN_NAMES = ['id', 'patternUnits', 'width', 'height'];
+const HATCH_NAMES = ['d', 'fill', 'stroke', 'stroke-width'];
+
 function pattern(sink: SvgSink, h: HatchPattern): void {
-  sink.open('pattern');
-  sink.attr('id', h.id);
-  sink.attr('patternUnits', 'userSpaceOnUse');
-  sink.attr('width', h.size);
-  sink.attr('height', h.size);
-  sink.open('path');
-  sink.attr('d', h.d);
-  sink.attr('fill', 'none');
-  sink.attr('stroke', h.stroke);
-  sink.attr('stroke-width', h.strokeWidth);
-  sink.close('path');
+  sink.open('pattern', PATTERN_NAMES, [h.id, 'userSpaceOnUse', h.size, h.size]);
+  sink.element('path', HATCH_NAMES, [h.d, 'none', h.stroke, h.strokeWidth]);
   sink.close('pattern');
 }
 
-/** Attributes of the chart's `<svg>` root, for emitters that create the root themselves. */
-export function rootAttrs(sink: Pick<SvgSink, 'attr'>, scene: Scene): void {
-  sink.attr('viewBox', `0 0 ${scene.width} ${scene.height}`);
-  sink.attr('width', `${scene.width}mm`);
-  sink.attr('height', `${scene.height}mm`);
-  sink.attr('font-family', scene.fontFamily);
-  sink.attr('role', 'img');
-  sink.attr('aria-labelledby', 'ff-chart-title ff-chart-desc');
-  sink.attr('data-theme', scene.theme);
-}
+export const ROOT_NAMES = ['viewBox', 'width', 'height', 'font-family', 'role', 'aria-labelledby', 'data-theme'];
 
-const plain = (sink: SvgSink, tag: string, id: string | null, content: string): void => {
-  sink.open(tag);
-  if (id !== null) sink.attr('id', id);
-  sink.text(content);
-  sink.close(tag);
-};
+/** Values for ROOT_NAMES, for emitters that create the root themselves. */
+export const rootValues = (scene: Scene): AttrValue[] => [
+  `0 0 ${formatNumber(scene.width)} ${formatNumber(scene.height)}`,
+  `${formatNumber(scene.width)}mm`,
+  `${formatNumber(scene.height)}mm`,
+  scene.fontFamily,
+  'img',
+  'ff-chart-title ff-chart-desc',
+  scene.theme,
+];
+
+const ID = ['id'];
+const NONE: readonly string[] = [];
 
 /** The children of the root, in document order. */
 export function sceneChildren(sink: SvgSink, scene: Scene, fonts: readonly EmbeddedFont[] = []): void {
-  plain(sink, 'title', 'ff-chart-title', scene.title);
-  plain(sink, 'desc', 'ff-chart-desc', scene.desc);
+  sink.element('title', ID, ['ff-chart-title'], scene.title);
+  sink.element('desc', ID, ['ff-chart-desc'], scene.desc);
   if (fonts.length > 0) {
     const css = fonts.map((f) => `@font-face{font-family:'${f.family}';font-weight:${f.weight};src:url(data:font/ttf;base64,${f.base64}) format('truetype');}`);
-    plain(sink, 'style', null, css.join('\n'));
+    sink.element('style', NONE, [], css.join('\n'));
   }
   if (scene.patterns.length > 0) {
-    sink.open('defs');
+    sink.open('defs', NONE, []);
     for (const h of scene.patterns) pattern(sink, h);
     sink.close('defs');
   }

@@ -31,7 +31,9 @@ export function beads(model: Model, t: PageTransform, theme: Theme): BeadPrim[] 
   const hex = new Map(model.palette.map((p) => [p.key, p.hex]));
   const ink = labelColors([...hex.values(), '#808080']);
   const thickness = round2(BEAD_THICKNESS * t.scale);
-  return model.beads.map((bead) => {
+  // Gap beads go last: they are short and sit where other beads' ends meet, which would hide them.
+  const order = [...model.beads.filter((b) => !b.gap), ...model.beads.filter((b) => b.gap)];
+  return order.map((bead) => {
     const fill = hex.get(bead.color) ?? '#808080';
     const centre = toPage(t, bead);
     const length = round2(bead.length * t.scale);

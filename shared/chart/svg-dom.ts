@@ -5,7 +5,7 @@
  * checks that on svgdom. The DOM comes from the container the caller passes.
  */
 import { SVG, type Dom, type Svg } from '@svgdotjs/svg.js';
-import { formatNumber, rootAttrs, sceneChildren, type EmbeddedFont, type SvgSink } from './elements.js';
+import { formatNumber, ROOT_NAMES, rootValues, sceneChildren, type AttrValue, type EmbeddedFont, type SvgSink } from './elements.js';
 import type { Scene } from './scene-types.js';
 
 /** Added to every element of the highlighted unit (its cell, beads, cue and number). */
@@ -22,14 +22,27 @@ export interface ChartHandle {
   remove(): void;
 }
 
+function setAttrs(el: Svg | Dom, names: readonly string[], values: readonly AttrValue[]): void {
+  values.forEach((v, i) => {
+    if (v !== undefined) el.attr(names[i]!, typeof v === 'number' ? formatNumber(v) : v);
+  });
+}
+
 /** Builds the walk as svg.js elements under the root, in the same order and with the same attributes. */
 function domSink(root: Svg): SvgSink {
   const stack: Array<Svg | Dom> = [root];
   const top = (): Svg | Dom => stack[stack.length - 1]!;
   return {
-    open: (tag) => void stack.push(top().element(tag)),
-    attr: (name, value) => void top().attr(name, typeof value === 'number' ? formatNumber(value) : value),
-    text: (text) => void top().words(text),
+    element(tag, names, values, text) {
+      const el = top().element(tag);
+      setAttrs(el, names, values);
+      if (text !== undefined) el.words(text);
+    },
+    open(tag, names, values) {
+      const el = top().element(tag);
+      setAttrs(el, names, values);
+      stack.push(el);
+    },
     close: () => void stack.pop(),
   };
 }
@@ -38,9 +51,8 @@ export function drawScene(scene: Scene, container: Parameters<Svg['addTo']>[0], 
   const svg = SVG().addTo(container);
   // svg.js declares its own namespaces on a new root; the chart uses none of them.
   svg.attr('xmlns:svgjs', null).attr('xmlns:xlink', null).attr('version', null);
-  const sink = domSink(svg);
-  rootAttrs(sink, scene);
-  sceneChildren(sink, scene, fonts);
+  setAttrs(svg, ROOT_NAMES, rootValues(scene));
+  sceneChildren(domSink(svg), scene, fonts);
 
   const query = (selector: string): Dom[] => svg.find(selector).map((el) => el as Dom);
   let highlighted: number | null = null;
