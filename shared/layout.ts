@@ -6,7 +6,7 @@
  */
 import type { Result } from './diagnostic.js';
 import type { LayoutInfo } from './model.js';
-import { BASE, type Weave, type WeaveUnit } from './weave.js';
+import { BASE, type Weave, type WeaveUnit } from './weave-net.js';
 import { beadSize, unitSideMm } from './bead-sizes.js';
 
 export interface Geometry {

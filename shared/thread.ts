@@ -7,7 +7,7 @@
  */
 import type { Diagnostic, Result } from './diagnostic.js';
 import type { Corner, Place, StepAction, ThreadPass, UnitStep } from './model.js';
-import type { Weave, WeaveUnit } from './weave.js';
+import type { Weave, WeaveUnit } from './weave-net.js';
 import { findRoute, preferRoute, type Net } from './thread-route.js';
 
 export const PLACES: readonly Place[] = ['base', 'far', 'top', 'near'];

@@ -6,7 +6,8 @@
 import { fileStart, sortDiagnostics, type Diagnostic, type Result, type SourceRange } from './diagnostic.js';
 import type { PatternAst } from '../parser/ast.js';
 import type { Bead, LayoutInfo, Model, Place, RowInfo, ThreadPass, Unit, UnitStep } from './model.js';
-import { popcount, weave, type Weave } from './weave.js';
+import { weave } from './weave.js';
+import { popcount, type Weave } from './weave-net.js';
 import { PLACES, thread, type Thread } from './thread.js';
 import { layout, type Geometry } from './layout.js';
 

@@ -3,66 +3,13 @@
  * sharing rules of NOTATION.md section 3. Where beads land inside a unit is the
  * thread's business (thread.ts); this stage only decides which places a unit
  * shares, which corners it shares, and checks the bead count.
- *
- * Places and corners are small integers so the whole net is numbers in arrays:
- * place 0 base, 1 far, 2 top, 3 near; corner k sits between place k and place
- * k+1 (0 base|far, 1 far|top, 2 top|near, 3 near|base). The bead at place p
- * runs from corner p-1 to corner p.
  */
 import type { Diagnostic, Result, SourceRange } from './diagnostic.js';
-import type { Layout, KeyOrder, Mark, PatternAst, RowNode } from '../parser/ast.js';
+import type { PatternAst, RowNode } from '../parser/ast.js';
 import { expandRow, type FlatItem } from '../parser/expand.js';
 import { UNIT_LIMIT } from '../parser/limits.js';
+import { BASE, FAR, NEAR, TOP, popcount, type Weave, type WeaveRow, type WeaveUnit } from './weave-net.js';
 import { weaveDiagnostic, beadCountDiagnostic, misplacedMark, misplacedSkip } from './weave-messages.js';
-
-export const BASE = 0;
-export const FAR = 1;
-export const TOP = 2;
-export const NEAR = 3;
-
-export interface WeaveUnit {
-  row: number;
-  /** 1-based position among the units of its row, in the order of work. */
-  index: number;
-  mark: Mark;
-  keys: string;
-  range: SourceRange;
-  /** Bead at each place (base, far, top, near); -1 where there is none. */
-  beads: number[];
-  /** Junction at each corner (base|far, far|top, top|near, near|base); -1 where none. */
-  corners: number[];
-  /** Bit p is set when place p holds a bead placed by an earlier unit. */
-  shared: number;
-  failed: boolean;
-  /** Grid column (flat and tube) and the row's heading on the grid (+1 right, -1 left). */
-  col: number;
-  heading: 1 | -1;
-  /** 0-based position of the unit's row among the built rows. */
-  rowIndex: number;
-}
-
-export interface WeaveRow {
-  row: number;
-  word: 'row' | 'round';
-  units: number[];
-  heading: 'right' | 'left' | 'around';
-  notes: string[];
-  line: number;
-}
-
-export interface Weave {
-  layout: Layout;
-  order: KeyOrder;
-  units: WeaveUnit[];
-  rows: WeaveRow[];
-  /** Per bead: its two ends, the unit that picks it up and its place there, the unit that shares it (-1) and its place. */
-  beadEnds: number[];
-  beadOwner: number[];
-  beadOwnerPlace: number[];
-  beadSharer: number[];
-  beadSharerPlace: number[];
-  junctionCount: number;
-}
 
 /** One top bead of a row, as the next row meets it: its ends on the near and far side of the new row's direction. */
 interface BaseSlot {
@@ -71,9 +18,6 @@ interface BaseSlot {
   farJ: number;
   col: number;
 }
-
-export const popcount = (mask: number): number =>
-  (mask & 1) + ((mask >> 1) & 1) + ((mask >> 2) & 1) + ((mask >> 3) & 1);
 
 class Builder {
   readonly w: Weave;
