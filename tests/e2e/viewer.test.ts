@@ -187,6 +187,37 @@ describe('designer and tester in the browser', () => {
     expect(errors).toEqual([]);
   });
 
+  it('edits the source with live checks and a redrawn chart, saves a new version, and shows what changed in counts', async () => {
+    const scripts: string[] = [];
+    page.on('request', (r) => r.resourceType() === 'script' && scripts.push(r.url()));
+    await page.reload();
+    await page.getByTestId('chart').waitFor();
+    // The editor is loaded only with its page.
+    expect(scripts.some((u) => /pattern-edit/.test(u))).toBe(false);
+    await page.getByRole('link', { name: 'Edit source' }).click();
+    const editor = page.locator('.cm-content');
+    await editor.waitFor();
+    expect(scripts.some((u) => /pattern-edit/.test(u))).toBe(true);
+    await editor.click();
+    await page.keyboard.press('Control+End');
+    // Unit 2 of a later row shares its near and base beads, so three keys are one too many.
+    await page.keyboard.type('row 5: AAB BAB AA');
+    await page.getByRole('heading', { name: 'Checks: 1 error' }).waitFor();
+    expect(await page.getByText(/bead-count/).count()).toBeGreaterThan(0);
+    await shot(page, 'editor-error');
+    for (let i = 0; i < 'BAB AA'.length; i++) await page.keyboard.press('Backspace');
+    await page.keyboard.type('BA AB');
+    await page.getByRole('heading', { name: 'Checks: No problems found' }).waitFor();
+    // Source: NOTATION.md section 8, the panel is now 3 units by 5 rows: 3 x 6 + 5 x 4 = 38 beads.
+    await page.waitForFunction(`document.querySelectorAll('[data-testid="chart"] [data-bead]').length === 38`);
+    await page.getByRole('button', { name: 'Save as a new version' }).click();
+    await page.waitForURL(new RegExp(`/patterns/${patternId}$`));
+    await page.getByText('Version 2 against version 1').waitFor();
+    expect(await page.getByTestId('count-changes').textContent()).toContain('beads: 31 → 38 (+7)');
+    expect(await page.getByTestId('chart').locator('[data-bead]').count()).toBe(38);
+    await shot(page, 'versions');
+  });
+
   it('shows the tester a not-found page for a pattern that was not shared with them', async () => {
     const login = await fetch(`${viewer.url}/api/auth/login`, {
       method: 'POST',

@@ -17,15 +17,14 @@ import { ChartView } from '../components/chart-view.js';
 import { DiagnosticList, countText } from '../components/diagnostic-list.js';
 import { FormError } from '../components/field.js';
 import { QueryError } from '../components/query-error.js';
+import { ShadowHost } from '../components/shadow-host.js';
 import { NotFoundPage } from './not-found.js';
 
-export const patternEditLoader =
-  (queryClient: QueryClient) =>
-  async (args: LoaderFunctionArgs) => {
-    const { id } = patternParams(args);
-    await queryClient.ensureQueryData(patternQuery(id));
-    return { id };
-  };
+export const patternEditLoader = (queryClient: QueryClient) => async (args: LoaderFunctionArgs) => {
+  const { id } = patternParams(args);
+  await queryClient.ensureQueryData(patternQuery(id));
+  return { id };
+};
 
 export function PatternEditPage() {
   const { id } = useLoaderData() as { id: number };
@@ -78,7 +77,13 @@ function Editor({ detail }: { detail: PatternDetail }) {
           <Link className="btn" to={`/patterns/${detail.id}`}>
             Cancel
           </Link>
-          <button type="button" className="btn btn-primary" onClick={doSave} disabled={save.isPending || text === detail.source} aria-keyshortcuts="Control+S">
+          <button
+            type="button"
+            className="btn btn-primary"
+            onClick={doSave}
+            disabled={save.isPending || text === detail.source}
+            aria-keyshortcuts="Control+S"
+          >
             {save.isPending ? 'Saving…' : 'Save as a new version'}
           </button>
         </div>
@@ -89,28 +94,35 @@ function Editor({ detail }: { detail: PatternDetail }) {
           <label id="editor-label" className="label">
             Pattern source
           </label>
-          <CodeMirror
-            value={text}
-            onChange={setText}
-            height="60vh"
-            theme={dark ? 'dark' : 'light'}
-            extensions={[checkMarks, EditorView.contentAttributes.of({ 'aria-labelledby': 'editor-label' })]}
-            basicSetup={{ lineNumbers: true, foldGutter: false, autocompletion: false }}
-            className="overflow-hidden rounded border border-slate-400 font-mono text-sm"
-            onCreateEditor={(v) => {
-              view.current = v;
-              showChecks(v, diagnostics);
-              const line = Number(params.get('line'));
-              if (line > 0) goTo(v, lineOffset(v, line));
-            }}
-          />
+          <ShadowHost className="overflow-hidden rounded border border-slate-400 font-mono text-sm">
+            {(root) => (
+              <CodeMirror
+                root={root}
+                value={text}
+                onChange={setText}
+                height="60vh"
+                theme={dark ? 'dark' : 'light'}
+                extensions={[checkMarks, EditorView.contentAttributes.of({ 'aria-labelledby': 'editor-label' })]}
+                basicSetup={{ lineNumbers: true, foldGutter: false, autocompletion: false }}
+                onCreateEditor={(v) => {
+                  view.current = v;
+                  showChecks(v, diagnostics);
+                  const line = Number(params.get('line'));
+                  if (line > 0) goTo(v, lineOffset(v, line));
+                }}
+              />
+            )}
+          </ShadowHost>
         </div>
         <div className="space-y-4">
           <section aria-labelledby="live-checks-title" aria-live="polite">
             <h2 id="live-checks-title" className="mb-2">
               Checks: {countText(diagnostics)}
             </h2>
-            <DiagnosticList diagnostics={diagnostics} onSelect={(d) => view.current && goTo(view.current, d.range.offset)} />
+            <DiagnosticList
+              diagnostics={diagnostics}
+              onSelect={(d) => view.current && goTo(view.current, d.range.offset)}
+            />
           </section>
           <ChartView model={compiled.value.model} dark={dark} />
         </div>

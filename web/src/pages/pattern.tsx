@@ -3,6 +3,7 @@
  * source, versions, downloads and sharing. Everything is for the version in
  * the URL (`?version=N`), the current one when absent.
  */
+import { useMemo, useState } from 'react';
 import { useQuery, type QueryClient } from '@tanstack/react-query';
 import { Link, useLoaderData, useNavigate, type LoaderFunctionArgs } from 'react-router-dom';
 import { getSession, useSession } from '../api/session.js';
@@ -21,7 +22,7 @@ import { VersionsPanel } from '../components/versions-panel.js';
 import { DownloadsPanel, patternDownloads } from '../components/downloads-panel.js';
 import { SharingPanel } from '../components/sharing-panel.js';
 import { FeedbackPanel } from '../components/feedback-panel.js';
-import { SourceListing, lineAnchor } from '../components/source-listing.js';
+import { SourceListing } from '../components/source-listing.js';
 import { QueryError } from '../components/query-error.js';
 import { Section } from '../components/section.js';
 
@@ -56,10 +57,15 @@ function PatternBody({ detail, version }: { detail: PatternDetail; version?: num
   const notes = useQuery(feedbackQuery(detail.id));
   const remove = useDeletePattern(detail.id);
   const viewing = detail.viewing.version;
-  const noted = (notes.data?.items ?? [])
-    .filter((n) => n.status === 'open')
-    .map((n) => unitAt(model, { row: n.row, unit: n.unit ?? 1 })?.id)
-    .filter((u): u is number => u !== undefined);
+  const [line, setLine] = useState<number | undefined>();
+  const noted = useMemo(
+    () =>
+      (notes.data?.items ?? [])
+        .filter((n) => n.status === 'open')
+        .map((n) => unitAt(model, { row: n.row, unit: n.unit ?? 1 })?.id)
+        .filter((u): u is number => u !== undefined),
+    [notes.data, model],
+  );
   const versionQuery = version ? `?version=${version}` : '';
 
   return (
@@ -107,9 +113,9 @@ function PatternBody({ detail, version }: { detail: PatternDetail; version?: num
         <TallyQueryPanel query={tally} beadSize={model.header.beads.size} />
       </Section>
       <Section title="Checks">
-        <DiagnosticList diagnostics={detail.diagnostics} onSelect={(d) => navigate({ hash: lineAnchor(d.range.line) })} />
+        <DiagnosticList diagnostics={detail.diagnostics} onSelect={(d) => setLine(d.range.line)} />
         <h3 className="mt-4 mb-2 font-semibold">Source</h3>
-        <SourceListing source={detail.source} />
+        <SourceListing source={detail.source} line={line} />
       </Section>
       <Section title="Versions">
         <VersionsPanel patternId={detail.id} viewing={viewing} current={detail.version} />
