@@ -10,15 +10,12 @@ import { BEAD_SIZES, HEADER_KEYS, LAYOUTS, normaliseBeads, ORDERS } from './valu
 
 export function format(ast: PatternAst): string {
   const blocks: string[][] = [];
-  const head = [...(ast.headComments ?? [])];
+  // The file's own comments stand directly above the header, as in a hand-written file.
+  const head = (ast.headComments ?? []).map(commentLine);
   const entries = orderEntries(ast.header.entries);
-  const first = entries[0];
-  // Comments above whatever ends up first read as the file's own comments, as they will when read back.
-  if (head.length === 0 && first?.leadingComments?.length) head.push(...first.leadingComments.splice(0));
-  if (head.length > 0) blocks.push(head.map(commentLine));
-
   const width = Math.max(0, ...entries.map((e) => e.key.length + 2));
-  if (entries.length > 0) blocks.push(entries.flatMap((e) => [...comments(e.leadingComments), headerLine(e, width)]));
+  const header = [...head, ...entries.flatMap((e) => [...comments(e.leadingComments), headerLine(e, width)])];
+  if (header.length > 0) blocks.push(header);
   if (ast.notes.length > 0) blocks.push(ast.notes.flatMap(noteLines));
   if (ast.colors.length > 0 || ast.colorsComments?.length)
     blocks.push([...comments(ast.colorsComments), 'colors:', ...colorTable(ast.colors)]);
@@ -50,7 +47,7 @@ function orderEntries(entries: HeaderEntry[]): HeaderEntry[] {
   return entries
     .map((e, i) => ({ e, i }))
     .sort((a, b) => rank(a.e) - rank(b.e) || a.i - b.i)
-    .map(({ e }) => ({ ...e, leadingComments: [...(e.leadingComments ?? [])] }));
+    .map(({ e }) => e);
 }
 
 function headerLine(e: HeaderEntry, width: number): string {

@@ -48,7 +48,6 @@ describe('canonical layout', () => {
     expect(format(parse(text).value)).toBe(
       [
         '# top',
-        '',
         'title:    Spacing',
         'designer: Wren Halloway',
         'beads:    8/0 round',
