@@ -21,10 +21,17 @@ export async function launchChromium(): Promise<Browser> {
   });
 }
 
-/** Page errors fail the test that caused them instead of passing unseen. */
+/**
+ * Page errors, and console errors such as a refusal by the Content-Security-Policy,
+ * fail the test that caused them instead of passing unseen. A failed request
+ * the test provokes on purpose (a not-found answer) is not an error of the page.
+ */
 export function watchErrors(page: Page): string[] {
   const errors: string[] = [];
   page.on('pageerror', (e) => errors.push(e.message));
+  page.on('console', (m) => {
+    if (m.type() === 'error' && !/Failed to load resource: the server responded with a status of 404/.test(m.text())) errors.push(m.text());
+  });
   return errors;
 }
 

@@ -216,6 +216,7 @@ describe('designer and tester in the browser', () => {
     expect(await page.getByTestId('count-changes').textContent()).toContain('beads: 31 → 38 (+7)');
     expect(await page.getByTestId('chart').locator('[data-bead]').count()).toBe(38);
     await shot(page, 'versions');
+    expect(errors).toEqual([]);
   });
 
   it('shows the tester a not-found page for a pattern that was not shared with them', async () => {
