@@ -117,7 +117,8 @@ describe('designer and tester in the browser', () => {
     await page.getByRole('button', { name: 'Create share link' }).click();
     shareUrl = (await page.getByTestId('share-url').textContent())!;
     expect(shareUrl).toMatch(new RegExp(`^${viewer.url}/s/[A-Za-z0-9_-]{40,}$`));
-    const stranger = await browser.newContext();
+    // A dark system theme, which the page follows without being told.
+    const stranger = await browser.newContext({ colorScheme: 'dark' });
     const p = await stranger.newPage();
     const strangerErrors = watchErrors(p);
     await p.goto(shareUrl);
@@ -126,7 +127,9 @@ describe('designer and tester in the browser', () => {
     expect(await p.getByRole('button', { name: 'Sign out' }).count()).toBe(0);
     await p.keyboard.press('ArrowRight');
     expect(await placeText(p)).toBe('Row 1, unit 2 of 3');
-    await shot(p, 'shared-view');
+    expect(await p.evaluate(() => document.documentElement.classList.contains('dark'))).toBe(true);
+    expect(await p.getByTestId('chart').locator('svg').first().getAttribute('data-theme')).toBe('dark');
+    await shot(p, 'shared-view-dark');
     expect(strangerErrors).toEqual([]);
     await stranger.close();
   });
@@ -237,5 +240,21 @@ describe('designer and tester in the browser', () => {
     expect(await tp.getByText('Private Band').count()).toBe(0);
     await shot(tp, 'not-found');
     await tester.close();
+  });
+
+  it('shows an admin the accounts and the caught invitation mail', async () => {
+    const admin = await browser.newContext();
+    admin.setDefaultTimeout(10_000);
+    const p = await admin.newPage();
+    const adminErrors = watchErrors(p);
+    await signIn(p, 'admin@example.com');
+    await p.getByRole('link', { name: 'Admin' }).click();
+    await p.getByRole('cell', { name: TESTER }).waitFor();
+    expect(await p.getByLabel(`Role of new.tester`).inputValue()).toBe('tester');
+    await p.getByRole('heading', { name: 'Outbox (development)' }).waitFor();
+    expect(await p.getByText(`to ${TESTER}`).count()).toBeGreaterThan(0);
+    await shot(p, 'admin');
+    expect(adminErrors).toEqual([]);
+    await admin.close();
   });
 });
