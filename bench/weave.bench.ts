@@ -27,18 +27,25 @@ const SMALL = panelText(500, 200);
 const LARGE = panelText(500, 400);
 const CHILD = 'FOURFOLD_WEAVE_BENCH_CHILD';
 
-/** Heap held by one compiled 200,000-unit model, in bytes per unit (run with --expose-gc). */
-function heldPerUnit(): number {
+/**
+ * Heap held by one compiled 200,000-unit model, in bytes per unit (run with
+ * --expose-gc), and the peak resident size the compile added, per unit (what
+ * the process needed at its height, garbage and all).
+ */
+function perUnit(): { held: number; peak: number } {
   const gc = (globalThis as { gc?: () => void }).gc!;
   gc();
   const before = process.memoryUsage().heapUsed;
+  const rssBefore = process.memoryUsage().rss;
   const held = compile(LARGE);
+  const peakRss = process.resourceUsage().maxRSS * 1024;
   gc();
   const after = process.memoryUsage().heapUsed;
-  return (after - before) / held.value.model.units.length;
+  const units = held.value.model.units.length;
+  return { held: (after - before) / units, peak: (peakRss - rssBefore) / units };
 }
 
-if (process.env[CHILD] === '1') process.stdout.write(`${heldPerUnit()}\n`);
+if (process.env[CHILD] === '1') process.stdout.write(`${JSON.stringify(perUnit())}\n`);
 
 const bench: Bench = {
   name: 'weave engine',
@@ -56,12 +63,11 @@ const bench: Bench = {
     const median = (xs: number[]) => xs.sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
     const small = median(smallRuns);
     const large = median(largeRuns);
-    const perUnit = Number(
-      execFileSync(process.execPath, ['--expose-gc', fileURLToPath(import.meta.url)], {
-        env: { ...process.env, [CHILD]: '1' },
-        encoding: 'utf8',
-      }).trim(),
-    );
+    const child = execFileSync(process.execPath, ['--expose-gc', fileURLToPath(import.meta.url)], {
+      env: { ...process.env, [CHILD]: '1' },
+      encoding: 'utf8',
+    });
+    const memory = JSON.parse(child) as { held: number; peak: number };
     return [
       {
         name: 'compile 200,000-unit panel vs 100,000-unit panel',
@@ -72,10 +78,11 @@ const bench: Bench = {
       },
       {
         name: 'heap held by model and thread path per unit (200,000 units)',
-        value: perUnit,
+        value: memory.held,
         unit: 'bytes',
         goal: { atMost: 2048 },
       },
+      { name: 'peak resident size added while compiling, per unit (200,000 units)', value: memory.peak, unit: 'bytes' },
     ];
   },
 };
