@@ -24,7 +24,10 @@ const WEB_DIR = join(process.cwd(), 'dist', 'web');
 /** The entry script and every module it preloads: what the browser fetches before the first page shows. */
 export async function initialJsGzipBytes(webDir: string): Promise<number> {
   const html = await readFile(join(webDir, 'index.html'), 'utf8');
-  const srcs = [...html.matchAll(/<script[^>]+type="module"[^>]+src="([^"]+)"/g), ...html.matchAll(/<link[^>]+rel="modulepreload"[^>]+href="([^"]+)"/g)].map((m) => m[1]!);
+  const srcs = [
+    ...html.matchAll(/<script[^>]+type="module"[^>]+src="([^"]+)"/g),
+    ...html.matchAll(/<link[^>]+rel="modulepreload"[^>]+href="([^"]+)"/g),
+  ].map((m) => m[1]!);
   if (srcs.length === 0) throw new Error('no module script in dist/web/index.html: is the web app built?');
   let total = 0;
   for (const src of new Set(srcs)) total += gzipSync(await readFile(join(webDir, src))).length;
@@ -33,13 +36,20 @@ export async function initialJsGzipBytes(webDir: string): Promise<number> {
 
 /** Wall time from navigation to `count` bead elements in the document, in a fresh context each time. */
 async function timeToBeads(browser: Browser, url: string, count: number): Promise<number> {
-  return medianMs(async () => {
-    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-    const page = await context.newPage();
-    await page.goto(url, { waitUntil: 'commit' });
-    await page.waitForFunction(`document.querySelectorAll('[data-bead]').length === ${count}`, undefined, { polling: 'raf', timeout: 60_000 });
-    await context.close();
-  }, 5, 1);
+  return medianMs(
+    async () => {
+      const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+      const page = await context.newPage();
+      await page.goto(url, { waitUntil: 'commit' });
+      await page.waitForFunction(`document.querySelectorAll('[data-bead]').length === ${count}`, undefined, {
+        polling: 'raf',
+        timeout: 60_000,
+      });
+      await context.close();
+    },
+    5,
+    1,
+  );
 }
 
 const bench: Bench = {
@@ -47,7 +57,12 @@ const bench: Bench = {
   async run() {
     const figures: Figure[] = [];
     const js = await initialJsGzipBytes(WEB_DIR);
-    figures.push({ name: 'initial JavaScript of the production build, gzipped', value: js / 1000, unit: 'kB', goal: { atMost: 250 } });
+    figures.push({
+      name: 'initial JavaScript of the production build, gzipped',
+      value: js / 1000,
+      unit: 'kB',
+      goal: { atMost: 250 },
+    });
 
     const dir = await mkdtemp(join(tmpdir(), 'fourfold-web-bench-'));
     const source = roundPattern(50);
@@ -62,7 +77,15 @@ const bench: Bench = {
     const browser = await chromium.launch({
       executablePath: '/usr/bin/chromium',
       headless: true,
-      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'],
+      args: [
+        '--no-sandbox',
+        '--disable-gpu',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--disable-sync',
+        '--no-first-run',
+        '--disable-quic',
+      ],
     });
     try {
       const staticUrl = `http://127.0.0.1:${(files.address() as AddressInfo).port}/round.svg`;

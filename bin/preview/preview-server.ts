@@ -33,7 +33,12 @@ export interface PreviewHandle {
   close(): Promise<void>;
 }
 
-const readProblem = (message: string): Diagnostic => ({ severity: 'error', id: 'read-failed', message, range: fileStart });
+const readProblem = (message: string): Diagnostic => ({
+  severity: 'error',
+  id: 'read-failed',
+  message,
+  range: fileStart,
+});
 
 export async function startPreview(options: PreviewOptions): Promise<PreviewHandle> {
   const file = basename(options.path);
@@ -45,8 +50,14 @@ export async function startPreview(options: PreviewOptions): Promise<PreviewHand
     try {
       source = await readFile(options.path, 'utf8');
     } catch (error) {
-      const why = (error as { code?: string }).code === 'ENOENT' ? 'the file is gone (renamed or deleted?)' : String(error);
-      state = { ...state, revision: state.revision + 1, diagnostics: [readProblem(`Cannot read ${file}: ${why}.`)], stale: state.model !== null };
+      const why =
+        (error as { code?: string }).code === 'ENOENT' ? 'the file is gone (renamed or deleted?)' : String(error);
+      state = {
+        ...state,
+        revision: state.revision + 1,
+        diagnostics: [readProblem(`Cannot read ${file}: ${why}.`)],
+        stale: state.model !== null,
+      };
       return broadcast();
     }
     const result = compile(source);
@@ -68,7 +79,10 @@ export async function startPreview(options: PreviewOptions): Promise<PreviewHand
 
   await refresh();
   // awaitWriteFinish: editors write in several chunks; read once the file has settled.
-  const watcher: FSWatcher = watch(options.path, { ignoreInitial: true, awaitWriteFinish: { stabilityThreshold: 40, pollInterval: 10 } });
+  const watcher: FSWatcher = watch(options.path, {
+    ignoreInitial: true,
+    awaitWriteFinish: { stabilityThreshold: 40, pollInterval: 10 },
+  });
   let queued = Promise.resolve();
   const onChange = () => {
     queued = queued.then(refresh);

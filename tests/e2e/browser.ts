@@ -12,12 +12,21 @@ export const CHROMIUM = '/usr/bin/chromium';
 export const RESULTS = join(process.cwd(), 'test-results');
 
 export async function launchChromium(): Promise<Browser> {
-  if (!existsSync(CHROMIUM)) throw new Error(`${CHROMIUM} is missing: install Debian's chromium package (.ci/run does)`);
+  if (!existsSync(CHROMIUM))
+    throw new Error(`${CHROMIUM} is missing: install Debian's chromium package (.ci/run does)`);
   await mkdir(RESULTS, { recursive: true });
   return chromium.launch({
     executablePath: CHROMIUM,
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--no-first-run',
+      '--disable-quic',
+    ],
   });
 }
 
@@ -30,9 +39,11 @@ export function watchErrors(page: Page): string[] {
   const errors: string[] = [];
   page.on('pageerror', (e) => errors.push(e.message));
   page.on('console', (m) => {
-    if (m.type() === 'error' && !/Failed to load resource: the server responded with a status of 404/.test(m.text())) errors.push(m.text());
+    if (m.type() === 'error' && !/Failed to load resource: the server responded with a status of 404/.test(m.text()))
+      errors.push(m.text());
   });
   return errors;
 }
 
-export const shot = (page: Page, name: string) => page.screenshot({ path: join(RESULTS, `${name}.png`), fullPage: true });
+export const shot = (page: Page, name: string) =>
+  page.screenshot({ path: join(RESULTS, `${name}.png`), fullPage: true });

@@ -27,7 +27,10 @@ beforeAll(async () => {
   dir = await mkdtemp(join(tmpdir(), 'fourfold-preview-'));
   file = join(dir, 'live-strip.ffp');
   await writeFile(file, strip(3));
-  [preview, browser] = await Promise.all([ensureWebBuild().then((webRoot) => startPreview({ path: file, port: 0, webRoot })), launchChromium()]);
+  [preview, browser] = await Promise.all([
+    ensureWebBuild().then((webRoot) => startPreview({ path: file, port: 0, webRoot })),
+    launchChromium(),
+  ]);
   page = await browser.newPage({ viewport: { width: 1024, height: 800 } });
   page.setDefaultTimeout(10_000);
 });
@@ -70,7 +73,8 @@ async function nextState(until: (s: PreviewState) => boolean, change: () => Prom
 
 const beadCount = () => page.getByTestId('chart').locator('[data-bead]').count();
 // A string, because the test code is type-checked for Node, where there is no document.
-const waitForBeads = (n: number) => page.waitForFunction(`document.querySelectorAll('[data-testid="chart"] [data-bead]').length === ${n}`);
+const waitForBeads = (n: number) =>
+  page.waitForFunction(`document.querySelectorAll('[data-testid="chart"] [data-bead]').length === ${n}`);
 
 describe('live preview', () => {
   it('sends a new model over the event stream when the file is saved', async () => {
@@ -113,10 +117,13 @@ describe('live preview', () => {
   it('answers only under its loopback name, so another site cannot read the file through DNS rebinding', async () => {
     const { port } = new URL(preview.url);
     const status = await new Promise<number>((resolve, reject) => {
-      const req = request({ host: '127.0.0.1', port, path: '/api/preview/state', headers: { Host: `attacker.example:${port}` } }, (res) => {
-        res.resume();
-        resolve(res.statusCode ?? 0);
-      });
+      const req = request(
+        { host: '127.0.0.1', port, path: '/api/preview/state', headers: { Host: `attacker.example:${port}` } },
+        (res) => {
+          res.resume();
+          resolve(res.statusCode ?? 0);
+        },
+      );
       req.on('error', reject);
       req.end();
     });

@@ -41,7 +41,11 @@ let patternId = 0;
 let errors: string[] = [];
 
 beforeAll(async () => {
-  [viewer, browser, dir] = await Promise.all([startViewer(), launchChromium(), mkdtemp(join(tmpdir(), 'fourfold-e2e-'))]);
+  [viewer, browser, dir] = await Promise.all([
+    startViewer(),
+    launchChromium(),
+    mkdtemp(join(tmpdir(), 'fourfold-e2e-')),
+  ]);
   designer = await browser.newContext({ viewport: { width: 1280, height: 900 } });
   designer.setDefaultTimeout(10_000);
   page = await designer.newPage();
@@ -91,7 +95,9 @@ describe('designer and tester in the browser', () => {
   it('steps through a row with the arrow keys and finds the place again after a reload', async () => {
     expect(await placeText(page)).toBe('Row 1, unit 1 of 3');
     await page.getByRole('heading', { name: 'Tidewater Band' }).click();
-    const saved = page.waitForResponse((r) => r.url().endsWith(`/api/patterns/${patternId}/place`) && r.request().method() === 'PUT');
+    const saved = page.waitForResponse(
+      (r) => r.url().endsWith(`/api/patterns/${patternId}/place`) && r.request().method() === 'PUT',
+    );
     for (let i = 0; i < 3; i++) await page.keyboard.press('ArrowRight');
     expect(await placeText(page)).toBe('Row 2, unit 1 of 3');
     expect(await page.getByTestId('step-text').textContent()).toMatch(/Pick up/);
@@ -103,10 +109,19 @@ describe('designer and tester in the browser', () => {
   });
 
   it('downloads the chart as SVG with the same bytes the CLI writes', async () => {
-    const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Chart (SVG)' }).click()]);
+    const [download] = await Promise.all([
+      page.waitForEvent('download'),
+      page.getByRole('button', { name: 'Chart (SVG)' }).click(),
+    ]);
     const got = await readFile((await download.path())!);
     const cliOut = join(dir, 'cli.svg');
-    await promisify(execFile)(process.execPath, ['bin/fourfold.js', 'chart', join(dir, 'tidewater-band.ffp'), '-o', cliOut]);
+    await promisify(execFile)(process.execPath, [
+      'bin/fourfold.js',
+      'chart',
+      join(dir, 'tidewater-band.ffp'),
+      '-o',
+      cliOut,
+    ]);
     const want = await readFile(cliOut);
     expect(got.length).toBeGreaterThan(1000);
     expect(got.equals(want)).toBe(true);

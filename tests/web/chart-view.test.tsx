@@ -10,7 +10,8 @@ import { modelOf } from './helpers.js';
 // Source: NOTATION.md section 8, a flat panel of n units by r rows has n(r+1) + r(n+1) beads.
 const n = 3;
 const r = 2;
-const panel = 'title: Chart Panel\ncolors:\n  A #f4f1ea chalk\n  B #2e6f8e deep teal\nrow 1: BBBB AAA BBB\nrow 2: AAA BB AA\n';
+const panel =
+  'title: Chart Panel\ncolors:\n  A #f4f1ea chalk\n  B #2e6f8e deep teal\nrow 1: BBBB AAA BBB\nrow 2: AAA BB AA\n';
 
 describe('chart view', () => {
   it('draws one element per bead, as many as the tally counts and the closed form gives', () => {
@@ -29,8 +30,13 @@ describe('chart view', () => {
     const onPick = vi.fn();
     const current = model.rows[1]!.units[1]!;
     const { container } = render(<ChartView model={model} dark={false} current={current} onPick={onPick} />);
-    const outlined = [...container.querySelectorAll('.ff-bead.ff-highlight')].map((el) => Number(el.getAttribute('data-bead')));
-    const picked = model.steps.find((s) => s.unit === current)!.actions.filter((a) => a.kind === 'pickup').map((a) => a.bead);
+    const outlined = [...container.querySelectorAll('.ff-bead.ff-highlight')].map((el) =>
+      Number(el.getAttribute('data-bead')),
+    );
+    const picked = model.steps
+      .find((s) => s.unit === current)!
+      .actions.filter((a) => a.kind === 'pickup')
+      .map((a) => a.bead);
     expect(outlined.sort()).toEqual([...picked].sort());
     const passes = model.thread.filter((p) => p.unit === current).length;
     expect(container.querySelectorAll('.ff-thread-overlay .ff-thread')).toHaveLength(passes);

@@ -51,7 +51,10 @@ describe('text contrast', () => {
     expect(contrastRatio('#767676', '#ffffff')).toBeCloseTo(4.54, 2);
   });
 
-  it.each([...LIGHT.map((p) => ['light', ...p]), ...DARK.map((p) => ['dark', ...p])])('%s theme, %s on %s (%s): at least 4.5:1', (_theme, text, bg) => {
-    expect(contrastRatio(color(text!), color(bg!))).toBeGreaterThanOrEqual(4.5);
-  });
+  it.each([...LIGHT.map((p) => ['light', ...p]), ...DARK.map((p) => ['dark', ...p])])(
+    '%s theme, %s on %s (%s): at least 4.5:1',
+    (_theme, text, bg) => {
+      expect(contrastRatio(color(text!), color(bg!))).toBeGreaterThanOrEqual(4.5);
+    },
+  );
 });

@@ -18,7 +18,12 @@ async function signInWith(email: string, password: string) {
 describe('sign-in', () => {
   it('says the same thing for a wrong password as for an unknown address, and stays signed out', async () => {
     setSession(null);
-    mockApi({ 'POST /api/auth/login': { status: 401, json: { error: { code: 'invalid-credentials', message: 'Wrong e-mail or password.' } } } });
+    mockApi({
+      'POST /api/auth/login': {
+        status: 401,
+        json: { error: { code: 'invalid-credentials', message: 'Wrong e-mail or password.' } },
+      },
+    });
     renderRoutes(routes, '/sign-in');
     await signInWith('nobody@example.com', 'not-it');
     expect((await screen.findByRole('alert')).textContent).toBe('That e-mail and password do not match an account.');
@@ -27,7 +32,10 @@ describe('sign-in', () => {
 
   it('signs in, keeps the session, sends the token as Bearer, and goes where the visitor was headed', async () => {
     setSession(null);
-    const api = mockApi({ 'POST /api/auth/login': { json: { token: 'tok-123', user: designer } }, 'GET /api/patterns': emptyPage });
+    const api = mockApi({
+      'POST /api/auth/login': { json: { token: 'tok-123', user: designer } },
+      'GET /api/patterns': emptyPage,
+    });
     const { router } = renderRoutes(routes, '/library?q=band');
     await screen.findByRole('heading', { name: 'Sign in' });
     expect(router.state.location.search).toBe(`?next=${encodeURIComponent('/library?q=band')}`);
@@ -61,7 +69,10 @@ describe('passwords', () => {
 
   it('checks a new password before sending it, then resets with the token from the link and signs in', async () => {
     setSession(null);
-    const api = mockApi({ 'POST /api/auth/reset': { json: { token: 'tok-new', user: { ...designer, role: 'tester' } } }, 'GET /api/patterns': emptyPage });
+    const api = mockApi({
+      'POST /api/auth/reset': { json: { token: 'tok-new', user: { ...designer, role: 'tester' } } },
+      'GET /api/patterns': emptyPage,
+    });
     renderRoutes(routes, '/reset?token=abc123&invite=1');
     expect(screen.getByRole('heading', { name: 'Choose your password' })).toBeTruthy();
     const [first, second] = [screen.getByLabelText('New password'), screen.getByLabelText('New password again')];
@@ -84,7 +95,12 @@ describe('passwords', () => {
   });
 
   it('says when a reset link has been used or has expired', async () => {
-    mockApi({ 'POST /api/auth/reset': { status: 400, json: { error: { code: 'invalid-token', message: 'The link is not valid.' } } } });
+    mockApi({
+      'POST /api/auth/reset': {
+        status: 400,
+        json: { error: { code: 'invalid-token', message: 'The link is not valid.' } },
+      },
+    });
     renderRoutes(routes, '/reset?token=old');
     await userEvent.type(screen.getByLabelText('New password'), 'long-enough');
     await userEvent.type(screen.getByLabelText('New password again'), 'long-enough');
@@ -98,7 +114,16 @@ describe('passwords', () => {
     const api = mockApi({
       'POST /api/auth/password': () =>
         ++calls === 1
-          ? { status: 400, json: { error: { code: 'invalid-input', message: 'Invalid input', details: [{ path: ['current'], message: 'The current password is not right.' }] } } }
+          ? {
+              status: 400,
+              json: {
+                error: {
+                  code: 'invalid-input',
+                  message: 'Invalid input',
+                  details: [{ path: ['current'], message: 'The current password is not right.' }],
+                },
+              },
+            }
           : { status: 204 },
     });
     renderWithApp(<ChangePassword />);

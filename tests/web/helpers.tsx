@@ -32,9 +32,17 @@ export function mockApi(routes: Record<string, Handler | Answer>) {
     const req = { method, url, headers, body };
     sent.push(req);
     const route = routes[`${method} ${url.split('?')[0]}`];
-    const answer = route === undefined ? { status: 404, json: { error: { code: 'not-found', message: 'Not found.' } } } : typeof route === 'function' ? route(req) : route;
+    const answer =
+      route === undefined
+        ? { status: 404, json: { error: { code: 'not-found', message: 'Not found.' } } }
+        : typeof route === 'function'
+          ? route(req)
+          : route;
     const status = answer.status ?? 200;
-    return new Response(status === 204 ? null : JSON.stringify(answer.json ?? {}), { status, headers: { 'Content-Type': 'application/json' } });
+    return new Response(status === 204 ? null : JSON.stringify(answer.json ?? {}), {
+      status,
+      headers: { 'Content-Type': 'application/json' },
+    });
   });
   vi.stubGlobal('fetch', fetchMock);
   return { sent };

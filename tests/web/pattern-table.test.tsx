@@ -29,7 +29,18 @@ const summary = (over: Partial<PatternSummary>): PatternSummary => ({
 
 describe('library table', () => {
   it('shows one row per pattern with its counts, swatches and sharing, and marks patterns with errors', () => {
-    const items = [summary({}), summary({ id: 2, title: 'Broken Tube', layout: 'tube', beads: null, units: null, errors: 2, sharing: { links: 1, testers: 2 } })];
+    const items = [
+      summary({}),
+      summary({
+        id: 2,
+        title: 'Broken Tube',
+        layout: 'tube',
+        beads: null,
+        units: null,
+        errors: 2,
+        sharing: { links: 1, testers: 2 },
+      }),
+    ];
     renderWithApp(<PatternTable items={items} params={defaultListParams} onChange={() => {}} />);
     const rows = screen.getAllByRole('row').slice(1);
     expect(rows).toHaveLength(2);

@@ -15,7 +15,8 @@ const broken: CheckedFile = {
     {
       severity: 'error',
       id: 'bead-count',
-      message: 'row 2, unit 3: this unit shares its near bead and a base bead, so it takes 2 new beads; 3 are written (C C B).',
+      message:
+        'row 2, unit 3: this unit shares its near bead and a base bead, so it takes 2 new beads; 3 are written (C C B).',
       hint: "Mark an increase with '+' if that is meant.",
       range,
     },
@@ -29,11 +30,22 @@ describe('upload', () => {
   it('checks dropped files first, shows each file’s diagnostics, and saves with errors marked', async () => {
     const api = mockApi({
       'POST /api/check': { json: { files: [good, broken] } },
-      'POST /api/patterns': { status: 201, json: { items: [{ id: 7, title: 'Harbour Band', diagnostics: [] }, { id: 8, title: 'Kestrel Fan', diagnostics: broken.diagnostics }] } },
+      'POST /api/patterns': {
+        status: 201,
+        json: {
+          items: [
+            { id: 7, title: 'Harbour Band', diagnostics: [] },
+            { id: 8, title: 'Kestrel Fan', diagnostics: broken.diagnostics },
+          ],
+        },
+      },
     });
     const onSaved = vi.fn();
     renderWithApp(<UploadPanel onSaved={onSaved} />);
-    await userEvent.upload(screen.getByLabelText('Pattern files'), [file('band.ffp', 'title: Harbour Band\n'), file('fan.ffp', 'title: Kestrel Fan\n')]);
+    await userEvent.upload(screen.getByLabelText('Pattern files'), [
+      file('band.ffp', 'title: Harbour Band\n'),
+      file('fan.ffp', 'title: Kestrel Fan\n'),
+    ]);
 
     const fan = await screen.findByRole('article', { name: 'fan.ffp' });
     expect(within(fan).getByText('1 error')).toBeTruthy();
@@ -58,7 +70,9 @@ describe('upload', () => {
     const api = mockApi({ 'POST /api/check': { json: { files: [{ ...good, name: 'pasted.ffp' }] } } });
     renderWithApp(<UploadPanel onSaved={() => {}} />);
     // As a drop would: the browser's own file picker filter is not what refuses the file.
-    await userEvent.setup({ applyAccept: false }).upload(screen.getByLabelText('Pattern files'), [file('photo.png', 'not a pattern')]);
+    await userEvent
+      .setup({ applyAccept: false })
+      .upload(screen.getByLabelText('Pattern files'), [file('photo.png', 'not a pattern')]);
     expect((await screen.findByRole('alert')).textContent).toContain('photo.png: not a .ffp file');
     expect(api.sent).toHaveLength(0);
 
@@ -70,7 +84,9 @@ describe('upload', () => {
   });
 
   it('shows the server’s refusal in words', async () => {
-    mockApi({ 'POST /api/check': { status: 413, json: { error: { code: 'too-large', message: 'A file is over 1 MiB.' } } } });
+    mockApi({
+      'POST /api/check': { status: 413, json: { error: { code: 'too-large', message: 'A file is over 1 MiB.' } } },
+    });
     renderWithApp(<UploadPanel onSaved={() => {}} />);
     await userEvent.type(screen.getByLabelText('Or paste a pattern'), 'x');
     await userEvent.click(screen.getByRole('button', { name: 'Check the pasted pattern' }));

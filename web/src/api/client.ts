@@ -45,9 +45,16 @@ async function send(path: string, options: RequestOptions): Promise<Response> {
   if (response.ok) return response;
   // A token the server no longer accepts (expired, revoked): forget it, so the app asks to sign in.
   if (response.status === 401 && token) setSession(null);
-  const parsed = (await response.json().catch(() => null)) as { error?: { code?: string; message?: string; details?: unknown } } | null;
+  const parsed = (await response.json().catch(() => null)) as {
+    error?: { code?: string; message?: string; details?: unknown };
+  } | null;
   const error = parsed?.error;
-  throw new ApiError(response.status, error?.code ?? `http-${response.status}`, error?.message ?? response.statusText, error?.details);
+  throw new ApiError(
+    response.status,
+    error?.code ?? `http-${response.status}`,
+    error?.message ?? response.statusText,
+    error?.details,
+  );
 }
 
 export async function api<T>(path: string, options: RequestOptions = {}): Promise<T> {

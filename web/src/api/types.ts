@@ -78,7 +78,14 @@ export interface TallyJson {
   beads: number;
   units: number;
   rows: { row: number; units: number; beads: number }[];
-  colors: { key: string; name: string; hex: string; count: number; grams: { low: number; high: number }; buyGrams: number }[];
+  colors: {
+    key: string;
+    name: string;
+    hex: string;
+    count: number;
+    grams: { low: number; high: number };
+    buyGrams: number;
+  }[];
   spare: number;
   thread: { mm: number; threads: number };
   size: { widthMm: number; heightMm: number };

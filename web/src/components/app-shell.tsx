@@ -15,7 +15,10 @@ export function AppShell() {
   const role = session?.user.role;
   return (
     <div className="flex min-h-screen flex-col">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-white focus:p-2 dark:focus:bg-slate-900">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-white focus:p-2 dark:focus:bg-slate-900"
+      >
         Skip to content
       </a>
       <header className="no-print border-b border-slate-300 dark:border-slate-600">
@@ -48,7 +51,11 @@ export function AppShell() {
             {session ? (
               <>
                 <span className="muted hidden sm:inline">{session.user.name}</span>
-                <button type="button" className="btn" onClick={() => signOut.mutate(undefined, { onSettled: () => navigate('/sign-in') })}>
+                <button
+                  type="button"
+                  className="btn"
+                  onClick={() => signOut.mutate(undefined, { onSettled: () => navigate('/sign-in') })}
+                >
                   Sign out
                 </button>
               </>

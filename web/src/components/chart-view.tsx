@@ -33,7 +33,8 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
   const [hover, setHover] = useState<{ info: BeadInfo; left: number; top: number } | null>(null);
   const currentRow = current === undefined ? undefined : model.units[current]?.row;
   const threadScene = useMemo(
-    () => (currentRow === undefined ? null : buildScene(model, { theme: dark ? 'dark' : 'light', thread: currentRow }).value),
+    () =>
+      currentRow === undefined ? null : buildScene(model, { theme: dark ? 'dark' : 'light', thread: currentRow }).value,
     [model, dark, currentRow],
   );
 
@@ -62,7 +63,10 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
 
   const toChart = (clientX: number, clientY: number) => {
     const rect = chart.current!.svg.node.getBoundingClientRect();
-    return { x: box.x + ((clientX - rect.left) / rect.width) * box.w, y: box.y + ((clientY - rect.top) / rect.height) * box.h };
+    return {
+      x: box.x + ((clientX - rect.left) / rect.width) * box.w,
+      y: box.y + ((clientY - rect.top) / rect.height) * box.h,
+    };
   };
   const zoom = (factor: number, at?: { x: number; y: number }) =>
     setBox((b) => zoomAt(b, full, factor, at?.x ?? b.x + b.w / 2, at?.y ?? b.y + b.h / 2));
@@ -92,7 +96,12 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
   const onKeyDown = (e: KeyboardEvent) => {
     const stepX = box.w / 10;
     const stepY = box.h / 10;
-    const moves: Record<string, [number, number]> = { ArrowLeft: [-stepX, 0], ArrowRight: [stepX, 0], ArrowUp: [0, -stepY], ArrowDown: [0, stepY] };
+    const moves: Record<string, [number, number]> = {
+      ArrowLeft: [-stepX, 0],
+      ArrowRight: [stepX, 0],
+      ArrowUp: [0, -stepY],
+      ArrowDown: [0, stepY],
+    };
     if (e.key === '+' || e.key === '=') zoom(1.25);
     else if (e.key === '-') zoom(0.8);
     else if (e.key === '0') setBox(full);
@@ -113,7 +122,9 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
         <button type="button" className="btn" onClick={() => setBox(full)}>
           Fit
         </button>
-        <span className="muted self-center text-xs">Drag to pan; wheel, + and − to zoom; Shift+arrows pan when the chart has focus.</span>
+        <span className="muted self-center text-xs">
+          Drag to pan; wheel, + and − to zoom; Shift+arrows pan when the chart has focus.
+        </span>
       </div>
       <div
         ref={host}

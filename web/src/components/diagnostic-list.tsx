@@ -11,7 +11,15 @@ export function countText(diagnostics: readonly Diagnostic[]): string {
   return [errors && part(errors, 'error'), warnings && part(warnings, 'warning')].filter(Boolean).join(', ');
 }
 
-export function DiagnosticList({ diagnostics, onSelect, label = 'Checks' }: { diagnostics: readonly Diagnostic[]; onSelect?(d: Diagnostic): void; label?: string }) {
+export function DiagnosticList({
+  diagnostics,
+  onSelect,
+  label = 'Checks',
+}: {
+  diagnostics: readonly Diagnostic[];
+  onSelect?(d: Diagnostic): void;
+  label?: string;
+}) {
   if (diagnostics.length === 0) return <p className="text-sm">No problems found.</p>;
   return (
     <ul aria-label={label} className="space-y-2 text-sm">
@@ -20,7 +28,12 @@ export function DiagnosticList({ diagnostics, onSelect, label = 'Checks' }: { di
         return (
           <li key={`${d.range.offset}-${d.id}-${i}`} className="font-mono">
             {onSelect ? (
-              <button type="button" className="link" onClick={() => onSelect(d)} aria-label={`Go to line ${d.range.line}, column ${d.range.column}`}>
+              <button
+                type="button"
+                className="link"
+                onClick={() => onSelect(d)}
+                aria-label={`Go to line ${d.range.line}, column ${d.range.column}`}
+              >
                 {where}
               </button>
             ) : (

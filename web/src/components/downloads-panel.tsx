@@ -50,7 +50,17 @@ function save(blob: Blob, name: string): void {
   setTimeout(() => URL.revokeObjectURL(url), 10_000);
 }
 
-export function DownloadsPanel({ items, title, version, anonymous }: { items: DownloadItem[]; title: string; version?: number; anonymous?: boolean }) {
+export function DownloadsPanel({
+  items,
+  title,
+  version,
+  anonymous,
+}: {
+  items: DownloadItem[];
+  title: string;
+  version?: number;
+  anonymous?: boolean;
+}) {
   const [busy, setBusy] = useState<string | null>(null);
   const [error, setError] = useState<unknown>(null);
   const download = async (item: DownloadItem) => {

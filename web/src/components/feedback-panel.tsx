@@ -10,7 +10,8 @@ import type { StepPlace } from '../lib/stepper.js';
 import { FormError } from './field.js';
 import { QueryError } from './query-error.js';
 
-export const noteWhere = (n: Pick<FeedbackNote, 'row' | 'unit'>) => `row ${n.row}${n.unit !== null ? `, unit ${n.unit}` : ''}`;
+export const noteWhere = (n: Pick<FeedbackNote, 'row' | 'unit'>) =>
+  `row ${n.row}${n.unit !== null ? `, unit ${n.unit}` : ''}`;
 
 export function FeedbackPanel(props: {
   patternId: number;
@@ -50,7 +51,14 @@ export function FeedbackPanel(props: {
           <label className="label" htmlFor="note-text">
             Note
           </label>
-          <textarea id="note-text" className="input min-h-24" required maxLength={4000} value={text} onChange={(e) => setText(e.target.value)} />
+          <textarea
+            id="note-text"
+            className="input min-h-24"
+            required
+            maxLength={4000}
+            value={text}
+            onChange={(e) => setText(e.target.value)}
+          />
           <button type="submit" className="btn btn-primary mt-2" disabled={add.isPending || text.trim() === ''}>
             Add note
           </button>
@@ -62,7 +70,12 @@ export function FeedbackPanel(props: {
       {notes.data && (
         <>
           <h3 className="font-semibold">Open notes ({open.length})</h3>
-          <NoteList notes={open} version={props.version} onShow={props.onShow} onResolve={props.canResolve ? (id) => resolve.mutate(id) : undefined} />
+          <NoteList
+            notes={open}
+            version={props.version}
+            onShow={props.onShow}
+            onResolve={props.canResolve ? (id) => resolve.mutate(id) : undefined}
+          />
           {resolved.length > 0 && (
             <details>
               <summary className="cursor-pointer font-semibold">Resolved notes ({resolved.length})</summary>
@@ -75,14 +88,28 @@ export function FeedbackPanel(props: {
   );
 }
 
-function NoteList({ notes, version, onShow, onResolve }: { notes: FeedbackNote[]; version: number; onShow(p: StepPlace): void; onResolve?(id: number): void }) {
+function NoteList({
+  notes,
+  version,
+  onShow,
+  onResolve,
+}: {
+  notes: FeedbackNote[];
+  version: number;
+  onShow(p: StepPlace): void;
+  onResolve?(id: number): void;
+}) {
   if (notes.length === 0) return <p className="muted text-sm">None.</p>;
   return (
     <ul className="space-y-2" aria-label="Notes">
       {notes.map((n) => (
         <li key={n.id} className="card text-sm" data-testid="feedback-note">
           <p className="flex flex-wrap items-center gap-2">
-            <button type="button" className="link font-semibold" onClick={() => onShow({ row: n.row, unit: n.unit ?? 1 })}>
+            <button
+              type="button"
+              className="link font-semibold"
+              onClick={() => onShow({ row: n.row, unit: n.unit ?? 1 })}
+            >
               {noteWhere(n)}
             </button>
             <span className="muted">

@@ -2,7 +2,11 @@
 import { useId, type InputHTMLAttributes } from 'react';
 import { ApiError } from '../api/client.js';
 
-export function Field({ label, hint, ...input }: { label: string; hint?: string } & InputHTMLAttributes<HTMLInputElement>) {
+export function Field({
+  label,
+  hint,
+  ...input
+}: { label: string; hint?: string } & InputHTMLAttributes<HTMLInputElement>) {
   const id = useId();
   return (
     <div className="mb-4">
@@ -23,7 +27,10 @@ export function Field({ label, hint, ...input }: { label: string; hint?: string 
 export function errorText(error: unknown): string {
   if (!(error instanceof ApiError)) return error instanceof Error ? error.message : 'Something went wrong.';
   if (error.code === 'invalid-input' && Array.isArray(error.details) && error.details.length > 0) {
-    return (error.details as { message?: string }[]).map((d) => d.message).filter(Boolean).join(' ');
+    return (error.details as { message?: string }[])
+      .map((d) => d.message)
+      .filter(Boolean)
+      .join(' ');
   }
   return error.message;
 }

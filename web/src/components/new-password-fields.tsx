@@ -12,7 +12,12 @@ export function passwordProblem(password: string, repeat: string): string | null
   return null;
 }
 
-export function NewPasswordFields(props: { password: string; repeat: string; onPassword(v: string): void; onRepeat(v: string): void }) {
+export function NewPasswordFields(props: {
+  password: string;
+  repeat: string;
+  onPassword(v: string): void;
+  onRepeat(v: string): void;
+}) {
   return (
     <>
       <Field

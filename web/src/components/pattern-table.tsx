@@ -8,12 +8,30 @@ import type { ListParams, SortKey } from '../queries/patterns.js';
 
 const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
-function SortHeader({ label, sort, params, onSort }: { label: string; sort: SortKey; params: ListParams; onSort(p: ListParams): void }) {
+function SortHeader({
+  label,
+  sort,
+  params,
+  onSort,
+}: {
+  label: string;
+  sort: SortKey;
+  params: ListParams;
+  onSort(p: ListParams): void;
+}) {
   const active = params.sort === sort;
   const nextDir = active ? (params.dir === 'asc' ? 'desc' : 'asc') : sort === 'title' ? 'asc' : 'desc';
   return (
-    <th scope="col" aria-sort={active ? (params.dir === 'asc' ? 'ascending' : 'descending') : 'none'} className="p-2 text-left">
-      <button type="button" className="font-semibold hover:underline" onClick={() => onSort({ ...params, sort, dir: nextDir, page: 1 })}>
+    <th
+      scope="col"
+      aria-sort={active ? (params.dir === 'asc' ? 'ascending' : 'descending') : 'none'}
+      className="p-2 text-left"
+    >
+      <button
+        type="button"
+        className="font-semibold hover:underline"
+        onClick={() => onSort({ ...params, sort, dir: nextDir, page: 1 })}
+      >
         {label}
         <span aria-hidden="true">{active ? (params.dir === 'asc' ? ' ▲' : ' ▼') : ''}</span>
       </button>
@@ -25,7 +43,12 @@ export function Swatches({ colors }: { colors: PatternSummary['colors'] }) {
   return (
     <ul className="flex flex-wrap gap-1" aria-label={`Colours: ${colors.map((c) => c.name || c.key).join(', ')}`}>
       {colors.map((c) => (
-        <li key={c.key} title={`${c.key} ${c.name}`} className="h-4 w-4 rounded-full border border-slate-500" style={{ backgroundColor: c.hex }} />
+        <li
+          key={c.key}
+          title={`${c.key} ${c.name}`}
+          className="h-4 w-4 rounded-full border border-slate-500"
+          style={{ backgroundColor: c.hex }}
+        />
       ))}
     </ul>
   );
@@ -33,7 +56,15 @@ export function Swatches({ colors }: { colors: PatternSummary['colors'] }) {
 
 const num = (n: number | null) => (n === null ? '–' : n.toLocaleString());
 
-export function PatternTable({ items, params, onChange }: { items: PatternSummary[]; params: ListParams; onChange(p: ListParams): void }) {
+export function PatternTable({
+  items,
+  params,
+  onChange,
+}: {
+  items: PatternSummary[];
+  params: ListParams;
+  onChange(p: ListParams): void;
+}) {
   return (
     <div className="overflow-x-auto">
       <table className="w-full min-w-[40rem] border-collapse text-sm">
@@ -41,13 +72,23 @@ export function PatternTable({ items, params, onChange }: { items: PatternSummar
         <thead className="border-b border-slate-400">
           <tr>
             <SortHeader label="Title" sort="title" params={params} onSort={onChange} />
-            <th scope="col" className="p-2 text-left">Layout</th>
-            <th scope="col" className="p-2 text-right">Rows</th>
-            <th scope="col" className="p-2 text-right">Units</th>
+            <th scope="col" className="p-2 text-left">
+              Layout
+            </th>
+            <th scope="col" className="p-2 text-right">
+              Rows
+            </th>
+            <th scope="col" className="p-2 text-right">
+              Units
+            </th>
             <SortHeader label="Beads" sort="beads" params={params} onSort={onChange} />
-            <th scope="col" className="p-2 text-left">Colours</th>
+            <th scope="col" className="p-2 text-left">
+              Colours
+            </th>
             <SortHeader label="Updated" sort="updated" params={params} onSort={onChange} />
-            <th scope="col" className="p-2 text-left">Sharing</th>
+            <th scope="col" className="p-2 text-left">
+              Sharing
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -57,7 +98,11 @@ export function PatternTable({ items, params, onChange }: { items: PatternSummar
                 <Link className="link font-semibold" to={`/patterns/${p.id}`}>
                   {p.title}
                 </Link>
-                {p.errors > 0 && <span className="error-text ml-2 text-xs font-semibold">{p.errors} error{p.errors === 1 ? '' : 's'}</span>}
+                {p.errors > 0 && (
+                  <span className="error-text ml-2 text-xs font-semibold">
+                    {p.errors} error{p.errors === 1 ? '' : 's'}
+                  </span>
+                )}
               </td>
               <td className="p-2">{p.layout}</td>
               <td className="p-2 text-right font-mono">{num(p.rows)}</td>
@@ -84,17 +129,35 @@ export function sharingText(s: PatternSummary['sharing']): string {
   return parts.join(', ');
 }
 
-export function Pager({ total, params, onChange }: { total: number; params: ListParams; onChange(p: ListParams): void }) {
+export function Pager({
+  total,
+  params,
+  onChange,
+}: {
+  total: number;
+  params: ListParams;
+  onChange(p: ListParams): void;
+}) {
   const pages = Math.max(1, Math.ceil(total / params.pageSize));
   return (
     <nav aria-label="Pages" className="mt-4 flex items-center gap-3 text-sm">
-      <button type="button" className="btn" disabled={params.page <= 1} onClick={() => onChange({ ...params, page: params.page - 1 })}>
+      <button
+        type="button"
+        className="btn"
+        disabled={params.page <= 1}
+        onClick={() => onChange({ ...params, page: params.page - 1 })}
+      >
         Previous page
       </button>
       <span>
         Page {params.page} of {pages} ({total} pattern{total === 1 ? '' : 's'})
       </span>
-      <button type="button" className="btn" disabled={params.page >= pages} onClick={() => onChange({ ...params, page: params.page + 1 })}>
+      <button
+        type="button"
+        className="btn"
+        disabled={params.page >= pages}
+        onClick={() => onChange({ ...params, page: params.page + 1 })}
+      >
         Next page
       </button>
     </nav>

@@ -7,7 +7,17 @@ import { useDark } from '../lib/use-dark.js';
 import { ChartView } from './chart-view.js';
 import { RowStepper } from './row-stepper.js';
 
-export function PatternViewer({ model, place, onPlace, noted }: { model: Model; place: StepPlace | undefined; onPlace(p: StepPlace): void; noted?: readonly number[] }) {
+export function PatternViewer({
+  model,
+  place,
+  onPlace,
+  noted,
+}: {
+  model: Model;
+  place: StepPlace | undefined;
+  onPlace(p: StepPlace): void;
+  noted?: readonly number[];
+}) {
   const dark = useDark();
   const steps = useMemo(() => buildSteps(model), [model]);
   const unit = place ? unitAt(model, place) : undefined;
@@ -23,7 +33,11 @@ export function PatternViewer({ model, place, onPlace, noted }: { model: Model; 
           if (u) onPlace(placeOf(u));
         }}
       />
-      {place ? <RowStepper model={model} steps={steps} place={place} onPlace={onPlace} /> : <p>This pattern has no units yet.</p>}
+      {place ? (
+        <RowStepper model={model} steps={steps} place={place} onPlace={onPlace} />
+      ) : (
+        <p>This pattern has no units yet.</p>
+      )}
     </div>
   );
 }

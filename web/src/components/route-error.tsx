@@ -6,7 +6,8 @@ import { NotFoundPage } from '../pages/not-found.js';
 export function RouteError() {
   const error = useRouteError();
   const location = useLocation();
-  if ((error instanceof ApiError && error.status === 404) || (isRouteErrorResponse(error) && error.status === 404)) return <NotFoundPage />;
+  if ((error instanceof ApiError && error.status === 404) || (isRouteErrorResponse(error) && error.status === 404))
+    return <NotFoundPage />;
   if (error instanceof ApiError && error.status === 401) {
     return (
       <div role="alert" className="card max-w-lg">

@@ -10,9 +10,20 @@ import { rowHeading, unitHeading, unitSentences } from '../../../shared/steps-re
 import { rowRange, step, unitAt, type StepPlace } from '../lib/stepper.js';
 
 const typing = (target: EventTarget | null): boolean =>
-  target instanceof HTMLElement && (target.isContentEditable || ['INPUT', 'TEXTAREA', 'SELECT'].includes(target.tagName));
+  target instanceof HTMLElement &&
+  (target.isContentEditable || ['INPUT', 'TEXTAREA', 'SELECT'].includes(target.tagName));
 
-export function RowStepper({ model, steps, place, onPlace }: { model: Model; steps: StepsDoc; place: StepPlace; onPlace(p: StepPlace): void }) {
+export function RowStepper({
+  model,
+  steps,
+  place,
+  onPlace,
+}: {
+  model: Model;
+  steps: StepsDoc;
+  place: StepPlace;
+  onPlace(p: StepPlace): void;
+}) {
   const jumpId = useId();
   const [jump, setJump] = useState(String(place.row));
   const { first, last } = rowRange(model);
@@ -44,13 +55,23 @@ export function RowStepper({ model, steps, place, onPlace }: { model: Model; ste
   return (
     <section aria-label="Row stepper" className="card space-y-3">
       <div className="flex flex-wrap items-center gap-2">
-        <button type="button" className="btn" onClick={() => onPlace(step(model, place, -1))} aria-keyshortcuts="ArrowLeft">
+        <button
+          type="button"
+          className="btn"
+          onClick={() => onPlace(step(model, place, -1))}
+          aria-keyshortcuts="ArrowLeft"
+        >
           ← Previous unit
         </button>
         <p aria-live="polite" className="font-mono font-semibold" data-testid="stepper-place">
           {word} {place.row}, unit {place.unit} of {unitsInRow}
         </p>
-        <button type="button" className="btn" onClick={() => onPlace(step(model, place, 1))} aria-keyshortcuts="ArrowRight">
+        <button
+          type="button"
+          className="btn"
+          onClick={() => onPlace(step(model, place, 1))}
+          aria-keyshortcuts="ArrowRight"
+        >
           Next unit →
         </button>
       </div>

@@ -32,9 +32,18 @@ export function SharingPanel({ patternId }: { patternId: number }) {
         <h3 id="share-link-title" className="mb-2 font-semibold">
           Share link
         </h3>
-        <p className="muted mb-2 text-sm">Anyone with the link sees the chart, steps and tally, read-only, without signing in.</p>
+        <p className="muted mb-2 text-sm">
+          Anyone with the link sees the chart, steps and tally, read-only, without signing in.
+        </p>
         <FormError error={create.error ?? revoke.error} />
-        <Field label="Expires after (days, empty for never)" type="number" min={1} max={365} value={days} onChange={(e) => setDays(e.target.value)} />
+        <Field
+          label="Expires after (days, empty for never)"
+          type="number"
+          min={1}
+          max={365}
+          value={days}
+          onChange={(e) => setDays(e.target.value)}
+        />
         <button type="submit" className="btn" disabled={create.isPending}>
           Create share link
         </button>
@@ -52,7 +61,9 @@ export function SharingPanel({ patternId }: { patternId: number }) {
         <h3 id="invite-title" className="mb-2 font-semibold">
           Invite a tester
         </h3>
-        <p className="muted mb-2 text-sm">They get an e-mail; a new tester chooses a password from it, then sees this pattern and can leave notes.</p>
+        <p className="muted mb-2 text-sm">
+          They get an e-mail; a new tester chooses a password from it, then sees this pattern and can leave notes.
+        </p>
         <FormError error={invite.error ?? remove.error} />
         {invite.isSuccess && (
           <p role="status" className="mb-2 text-sm">
@@ -77,7 +88,12 @@ export function SharingPanel({ patternId }: { patternId: number }) {
                 <span>
                   Tester <strong>{t.name}</strong> ({t.email}), invited {day(t.invitedAt)}
                 </span>
-                <button type="button" className="btn" onClick={() => remove.mutate(t.id)} aria-label={`Remove ${t.email}`}>
+                <button
+                  type="button"
+                  className="btn"
+                  onClick={() => remove.mutate(t.id)}
+                  aria-label={`Remove ${t.email}`}
+                >
                   Remove
                 </button>
               </li>
@@ -90,7 +106,12 @@ export function SharingPanel({ patternId }: { patternId: number }) {
                   {s.active ? '' : s.revoked ? ' (revoked)' : ' (expired)'}
                 </span>
                 {s.active && (
-                  <button type="button" className="btn" onClick={() => revoke.mutate(s.id)} aria-label={`Revoke the link made ${day(s.createdAt)}`}>
+                  <button
+                    type="button"
+                    className="btn"
+                    onClick={() => revoke.mutate(s.id)}
+                    aria-label={`Revoke the link made ${day(s.createdAt)}`}
+                  >
                     Revoke
                   </button>
                 )}

@@ -11,7 +11,11 @@ export function SourceListing({ source, line }: { source: string; line?: number 
     <div className="max-h-96 overflow-auto rounded border border-slate-300 dark:border-slate-600">
       <ol ref={box} className="font-mono text-sm" aria-label="Source lines">
         {lines.map((text, i) => (
-          <li key={i} className={`flex ${line === i + 1 ? 'bg-amber-100 dark:bg-slate-700' : ''}`} aria-current={line === i + 1 ? 'location' : undefined}>
+          <li
+            key={i}
+            className={`flex ${line === i + 1 ? 'bg-amber-100 dark:bg-slate-700' : ''}`}
+            aria-current={line === i + 1 ? 'location' : undefined}
+          >
             <span className="muted w-12 shrink-0 select-none pr-3 text-right" aria-hidden="true">
               {i + 1}
             </span>

@@ -13,26 +13,40 @@ export function TallyPanel({ tally, beadSize }: { tally: TallyJson; beadSize: st
   return (
     <div className="space-y-6">
       <p>
-        <strong data-testid="tally-beads">{tally.beads.toLocaleString()}</strong> beads in {tally.units.toLocaleString()} units · finished size{' '}
-        {tally.size.widthMm} × {tally.size.heightMm} mm · thread {mmToCm(tally.thread.mm)} ({tally.thread.threads} thread
+        <strong data-testid="tally-beads">{tally.beads.toLocaleString()}</strong> beads in{' '}
+        {tally.units.toLocaleString()} units · finished size {tally.size.widthMm} × {tally.size.heightMm} mm · thread{' '}
+        {mmToCm(tally.thread.mm)} ({tally.thread.threads} thread
         {tally.thread.threads === 1 ? '' : 's'})
       </p>
       <div className="overflow-x-auto">
         <table className="w-full border-collapse text-sm">
-          <caption className="mb-1 text-left font-semibold">Beads per colour (buy amounts include a {Math.round(tally.spare * 100)}% spare)</caption>
+          <caption className="mb-1 text-left font-semibold">
+            Beads per colour (buy amounts include a {Math.round(tally.spare * 100)}% spare)
+          </caption>
           <thead className="border-b border-slate-400">
             <tr>
-              <th scope="col" className="p-2 text-left">Colour</th>
-              <th scope="col" className="p-2 text-right">Beads</th>
-              <th scope="col" className="p-2 text-right">Grams</th>
-              <th scope="col" className="p-2 text-right">Buy</th>
+              <th scope="col" className="p-2 text-left">
+                Colour
+              </th>
+              <th scope="col" className="p-2 text-right">
+                Beads
+              </th>
+              <th scope="col" className="p-2 text-right">
+                Grams
+              </th>
+              <th scope="col" className="p-2 text-right">
+                Buy
+              </th>
             </tr>
           </thead>
           <tbody>
             {tally.colors.map((c) => (
               <tr key={c.key} className="border-b border-slate-200 dark:border-slate-700">
                 <td className="p-2">
-                  <span className="mr-2 inline-block h-4 w-4 rounded-full border border-slate-500 align-middle" style={{ backgroundColor: c.hex }} />
+                  <span
+                    className="mr-2 inline-block h-4 w-4 rounded-full border border-slate-500 align-middle"
+                    style={{ backgroundColor: c.hex }}
+                  />
                   <span className="font-mono font-semibold">{c.key}</span> {c.name}
                 </td>
                 <td className="p-2 text-right font-mono">{c.count.toLocaleString()}</td>
@@ -50,10 +64,18 @@ export function TallyPanel({ tally, beadSize }: { tally: TallyJson; beadSize: st
         <table className="mt-2 border-collapse text-sm">
           <thead className="border-b border-slate-400">
             <tr>
-              <th scope="col" className="p-2 text-right">Row</th>
-              <th scope="col" className="p-2 text-right">Units</th>
-              <th scope="col" className="p-2 text-right">Beads</th>
-              <th scope="col" className="p-2 text-right">Running total</th>
+              <th scope="col" className="p-2 text-right">
+                Row
+              </th>
+              <th scope="col" className="p-2 text-right">
+                Units
+              </th>
+              <th scope="col" className="p-2 text-right">
+                Beads
+              </th>
+              <th scope="col" className="p-2 text-right">
+                Running total
+              </th>
             </tr>
           </thead>
           <tbody className="font-mono">
@@ -80,7 +102,10 @@ export function TallyPanel({ tally, beadSize }: { tally: TallyJson; beadSize: st
             For {beadSize} beads: {tools.needle}; {tools.thread}.
           </p>
         )}
-        <p className="mt-2 rounded border-l-4 border-amber-600 bg-amber-50 p-2 text-sm text-slate-900 dark:bg-slate-800 dark:text-slate-100" role="note">
+        <p
+          className="mt-2 rounded border-l-4 border-amber-600 bg-amber-50 p-2 text-sm text-slate-900 dark:bg-slate-800 dark:text-slate-100"
+          role="note"
+        >
           {SMALL_PARTS_CAUTION}
         </p>
       </section>

@@ -10,7 +10,8 @@ import { useCheck, useUploadPatterns } from '../queries/patterns.js';
 import { countText, DiagnosticList } from './diagnostic-list.js';
 import { FormError } from './field.js';
 
-type Pending = { kind: 'files'; files: File[]; checked: CheckedFile[] } | { kind: 'paste'; source: string; checked: CheckedFile[] };
+type Pending =
+  { kind: 'files'; files: File[]; checked: CheckedFile[] } | { kind: 'paste'; source: string; checked: CheckedFile[] };
 
 export function UploadPanel({ onSaved }: { onSaved(items: UploadedItem[]): void }) {
   const check = useCheck();
@@ -47,14 +48,25 @@ export function UploadPanel({ onSaved }: { onSaved(items: UploadedItem[]): void 
         })}
       >
         <input {...getInputProps({ 'aria-label': 'Pattern files' })} />
-        <p className="font-semibold">{isDragActive ? 'Drop the files to check them' : 'Drop .ffp files here, or click to choose'}</p>
+        <p className="font-semibold">
+          {isDragActive ? 'Drop the files to check them' : 'Drop .ffp files here, or click to choose'}
+        </p>
         <p className="muted text-sm">Up to 50 files, 1 MiB each.</p>
       </div>
       {fileRejections.length > 0 && (
         <ul role="alert" className="error-text text-sm">
           {fileRejections.map((r) => (
             <li key={r.file.name}>
-              {r.file.name}: {r.errors.map((e) => (e.code === 'file-invalid-type' ? 'not a .ffp file' : e.code === 'file-too-large' ? 'larger than 1 MiB' : e.message)).join('; ')}
+              {r.file.name}:{' '}
+              {r.errors
+                .map((e) =>
+                  e.code === 'file-invalid-type'
+                    ? 'not a .ffp file'
+                    : e.code === 'file-too-large'
+                      ? 'larger than 1 MiB'
+                      : e.message,
+                )
+                .join('; ')}
             </li>
           ))}
         </ul>
@@ -70,7 +82,12 @@ export function UploadPanel({ onSaved }: { onSaved(items: UploadedItem[]): void 
         <label className="label" htmlFor="paste-source">
           Or paste a pattern
         </label>
-        <textarea id="paste-source" className="input min-h-40 font-mono text-sm" value={paste} onChange={(e) => setPaste(e.target.value)} />
+        <textarea
+          id="paste-source"
+          className="input min-h-40 font-mono text-sm"
+          value={paste}
+          onChange={(e) => setPaste(e.target.value)}
+        />
         <button type="submit" className="btn mt-2" disabled={paste.trim() === '' || check.isPending}>
           Check the pasted pattern
         </button>
@@ -98,11 +115,19 @@ export function UploadPanel({ onSaved }: { onSaved(items: UploadedItem[]): void 
           ))}
           {withErrors > 0 && (
             <p className="warning-text text-sm">
-              {withErrors} of {pending.checked.length} {withErrors === 1 ? 'has' : 'have'} errors. You can save anyway; the library marks them.
+              {withErrors} of {pending.checked.length} {withErrors === 1 ? 'has' : 'have'} errors. You can save anyway;
+              the library marks them.
             </p>
           )}
-          <button type="button" className="btn btn-primary" onClick={save} disabled={upload.isPending || upload.isSuccess}>
-            {upload.isSuccess ? 'Saved' : `Save ${pending.checked.length === 1 ? 'this pattern' : `these ${pending.checked.length} patterns`}`}
+          <button
+            type="button"
+            className="btn btn-primary"
+            onClick={save}
+            disabled={upload.isPending || upload.isSuccess}
+          >
+            {upload.isSuccess
+              ? 'Saved'
+              : `Save ${pending.checked.length === 1 ? 'this pattern' : `these ${pending.checked.length} patterns`}`}
             {withErrors > 0 && !upload.isSuccess ? ' (with errors)' : ''}
           </button>
         </section>

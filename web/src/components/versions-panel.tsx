@@ -27,7 +27,15 @@ export function countChanges(before: TallyJson, after: TallyJson): CountChange[]
   return out;
 }
 
-export function VersionsPanel({ patternId, viewing, current }: { patternId: number; viewing: number; current: number }) {
+export function VersionsPanel({
+  patternId,
+  viewing,
+  current,
+}: {
+  patternId: number;
+  viewing: number;
+  current: number;
+}) {
   const versions = useQuery(versionsQuery(patternId));
   const previous = viewing > 1 ? viewing - 1 : undefined;
   const now = useQuery(tallyQuery(patternId, viewing));
@@ -43,7 +51,11 @@ export function VersionsPanel({ patternId, viewing, current }: { patternId: numb
             Version {viewing} against version {previous}
           </h3>
           {changes === null ? (
-            now.isError || before.isError ? <p className="muted text-sm">The counts of one of these versions could not be worked out.</p> : <p role="status">Comparing…</p>
+            now.isError || before.isError ? (
+              <p className="muted text-sm">The counts of one of these versions could not be worked out.</p>
+            ) : (
+              <p role="status">Comparing…</p>
+            )
           ) : changes.length === 0 ? (
             <p className="text-sm">The counts are the same.</p>
           ) : (
@@ -66,7 +78,10 @@ export function VersionsPanel({ patternId, viewing, current }: { patternId: numb
                 Version {v.number} (shown)
               </span>
             ) : (
-              <Link className="link" to={v.number === current ? `/patterns/${patternId}` : `/patterns/${patternId}?version=${v.number}`}>
+              <Link
+                className="link"
+                to={v.number === current ? `/patterns/${patternId}` : `/patterns/${patternId}?version=${v.number}`}
+              >
                 Version {v.number}
               </Link>
             )}

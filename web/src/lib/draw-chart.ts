@@ -19,9 +19,23 @@ export function drawChart(host: HTMLElement, scene: Scene): ChartHandle {
  * nested drawing in the chart's coordinates. Returns how to take it away.
  */
 export function drawThread(chart: ChartHandle, threadScene: Scene, unit: number): () => void {
-  const items = threadScene.items.filter((p) => (p.kind === 'path' || p.kind === 'text') && (p.role === 'thread' || p.role === 'thread-number') && p.data.unit === unit);
+  const items = threadScene.items.filter(
+    (p) =>
+      (p.kind === 'path' || p.kind === 'text') &&
+      (p.role === 'thread' || p.role === 'thread-number') &&
+      p.data.unit === unit,
+  );
   const overlay = drawScene({ ...threadScene, items, patterns: [] }, chart.svg);
-  overlay.svg.attr({ width: threadScene.width, height: threadScene.height, x: 0, y: 0, 'aria-hidden': 'true', role: null, 'aria-labelledby': null, class: 'ff-thread-overlay' });
+  overlay.svg.attr({
+    width: threadScene.width,
+    height: threadScene.height,
+    x: 0,
+    y: 0,
+    'aria-hidden': 'true',
+    role: null,
+    'aria-labelledby': null,
+    class: 'ff-thread-overlay',
+  });
   // The main chart already has the title and description; ids must stay unique.
   for (const el of overlay.svg.find('title, desc')) el.remove();
   return () => overlay.remove();

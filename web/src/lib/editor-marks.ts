@@ -2,7 +2,15 @@
  * Live checks in the editor: each diagnostic's span underlined and its line
  * tinted by severity. Only loaded with the editor page.
  */
-import { Decoration, EditorView, StateEffect, StateField, type DecorationSet, type Extension, type Range } from '@uiw/react-codemirror';
+import {
+  Decoration,
+  EditorView,
+  StateEffect,
+  StateField,
+  type DecorationSet,
+  type Extension,
+  type Range,
+} from '@uiw/react-codemirror';
 import type { Diagnostic } from '../../../shared/diagnostic.js';
 
 const setMarks = StateEffect.define<readonly Diagnostic[]>();
@@ -47,4 +55,5 @@ export function goTo(view: EditorView, offset: number): void {
   view.focus();
 }
 
-export const lineOffset = (view: EditorView, line: number): number => view.state.doc.line(Math.min(Math.max(1, line), view.state.doc.lines)).from;
+export const lineOffset = (view: EditorView, line: number): number =>
+  view.state.doc.line(Math.min(Math.max(1, line), view.state.doc.lines)).from;

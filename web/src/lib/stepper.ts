@@ -36,7 +36,8 @@ export function firstPlace(model: Model): StepPlace | undefined {
 /** A saved place that no longer exists in this version falls back to the start of its row, then to the first unit. */
 export function validPlace(model: Model, place: SavedPlace | null | undefined): StepPlace | undefined {
   if (place?.row != null) {
-    if (place.unit != null && unitAt(model, { row: place.row, unit: place.unit })) return { row: place.row, unit: place.unit };
+    if (place.unit != null && unitAt(model, { row: place.row, unit: place.unit }))
+      return { row: place.row, unit: place.unit };
     if (unitAt(model, { row: place.row, unit: 1 })) return { row: place.row, unit: 1 };
   }
   return firstPlace(model);

@@ -7,4 +7,5 @@ function subscribe(onChange: () => void): () => void {
   return () => observer.disconnect();
 }
 
-export const useDark = (): boolean => useSyncExternalStore(subscribe, () => document.documentElement.classList.contains('dark'));
+export const useDark = (): boolean =>
+  useSyncExternalStore(subscribe, () => document.documentElement.classList.contains('dark'));

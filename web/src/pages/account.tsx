@@ -51,7 +51,14 @@ export function ChangePassword() {
         </p>
       )}
       <FormError error={fresh.problem ? new Error(fresh.problem) : change.error} />
-      <Field label="Current password" type="password" autoComplete="current-password" required value={current} onChange={(e) => setCurrent(e.target.value)} />
+      <Field
+        label="Current password"
+        type="password"
+        autoComplete="current-password"
+        required
+        value={current}
+        onChange={(e) => setCurrent(e.target.value)}
+      />
       {fresh.fields}
       <button type="submit" className="btn btn-primary" disabled={change.isPending}>
         Change password
@@ -75,11 +82,19 @@ function Tokens() {
         Access tokens for the command line
       </h2>
       <p className="muted mb-4 text-sm">
-        Use a token with <code className="font-mono">fourfold login --token</code>. It is shown once; keep it somewhere safe.
+        Use a token with <code className="font-mono">fourfold login --token</code>. It is shown once; keep it somewhere
+        safe.
       </p>
       <form onSubmit={submit}>
         <FormError error={create.error} />
-        <Field label="Token name" required maxLength={100} value={name} onChange={(e) => setName(e.target.value)} hint="For example the computer it is for." />
+        <Field
+          label="Token name"
+          required
+          maxLength={100}
+          value={name}
+          onChange={(e) => setName(e.target.value)}
+          hint="For example the computer it is for."
+        />
         <button type="submit" className="btn" disabled={create.isPending}>
           Create token
         </button>
@@ -102,9 +117,17 @@ function Tokens() {
             <li key={t.id} className="flex items-center justify-between gap-2 text-sm">
               <span>
                 <span className="font-semibold">{t.name}</span>
-                <span className="muted"> · last used {t.lastUsedAt ? new Date(t.lastUsedAt).toLocaleDateString() : 'never'}</span>
+                <span className="muted">
+                  {' '}
+                  · last used {t.lastUsedAt ? new Date(t.lastUsedAt).toLocaleDateString() : 'never'}
+                </span>
               </span>
-              <button type="button" className="btn" onClick={() => revoke.mutate(t.id)} aria-label={`Revoke token ${t.name}`}>
+              <button
+                type="button"
+                className="btn"
+                onClick={() => revoke.mutate(t.id)}
+                aria-label={`Revoke token ${t.name}`}
+              >
                 Revoke
               </button>
             </li>

@@ -41,10 +41,18 @@ function Accounts({ selfId }: { selfId: number }) {
         <table className="w-full border-collapse text-sm">
           <thead className="border-b border-slate-400">
             <tr>
-              <th scope="col" className="p-2 text-left">Name</th>
-              <th scope="col" className="p-2 text-left">E-mail</th>
-              <th scope="col" className="p-2 text-left">Role</th>
-              <th scope="col" className="p-2 text-left"><span className="sr-only">Actions</span></th>
+              <th scope="col" className="p-2 text-left">
+                Name
+              </th>
+              <th scope="col" className="p-2 text-left">
+                E-mail
+              </th>
+              <th scope="col" className="p-2 text-left">
+                Role
+              </th>
+              <th scope="col" className="p-2 text-left">
+                <span className="sr-only">Actions</span>
+              </th>
             </tr>
           </thead>
           <tbody>
@@ -67,7 +75,11 @@ function Accounts({ selfId }: { selfId: number }) {
                 </td>
                 <td className="p-2">
                   {u.id !== selfId && (
-                    <button type="button" className="btn" onClick={() => window.confirm(`Delete the account of ${u.name}?`) && remove.mutate(u.id)}>
+                    <button
+                      type="button"
+                      className="btn"
+                      onClick={() => window.confirm(`Delete the account of ${u.name}?`) && remove.mutate(u.id)}
+                    >
                       Delete
                     </button>
                   )}
@@ -107,16 +119,34 @@ function NewAccount() {
       <FormError error={create.error} />
       {create.isSuccess && <p role="status">Account created.</p>}
       <Field label="Name" required value={form.name} onChange={(e) => setForm({ ...form, name: e.target.value })} />
-      <Field label="E-mail" type="email" required value={form.email} onChange={(e) => setForm({ ...form, email: e.target.value })} />
+      <Field
+        label="E-mail"
+        type="email"
+        required
+        value={form.email}
+        onChange={(e) => setForm({ ...form, email: e.target.value })}
+      />
       <label className="mb-4 block">
         <span className="label">Role</span>
-        <select className="input" value={form.role} onChange={(e) => setForm({ ...form, role: e.target.value as Role })}>
+        <select
+          className="input"
+          value={form.role}
+          onChange={(e) => setForm({ ...form, role: e.target.value as Role })}
+        >
           {ROLES.map((r) => (
             <option key={r}>{r}</option>
           ))}
         </select>
       </label>
-      <Field label="First password" type="password" autoComplete="new-password" required minLength={8} value={form.password} onChange={(e) => setForm({ ...form, password: e.target.value })} />
+      <Field
+        label="First password"
+        type="password"
+        autoComplete="new-password"
+        required
+        minLength={8}
+        value={form.password}
+        onChange={(e) => setForm({ ...form, password: e.target.value })}
+      />
       <button type="submit" className="btn btn-primary" disabled={create.isPending}>
         Create account
       </button>

@@ -15,12 +15,21 @@ export function ForgotPasswordPage() {
       <h1 className="mb-6">Forgotten password</h1>
       {request.isSuccess ? (
         // Worded the same whether or not the address has an account.
-        <p role="status">If {email} has an account, a link to choose a new password is on its way. The link works once, for one hour.</p>
+        <p role="status">
+          If {email} has an account, a link to choose a new password is on its way. The link works once, for one hour.
+        </p>
       ) : (
         <form onSubmit={submit}>
           <p className="mb-4">Enter your e-mail and we will send a link to choose a new password.</p>
           <FormError error={request.error} />
-          <Field label="E-mail" type="email" autoComplete="email" required value={email} onChange={(e) => setEmail(e.target.value)} />
+          <Field
+            label="E-mail"
+            type="email"
+            autoComplete="email"
+            required
+            value={email}
+            onChange={(e) => setEmail(e.target.value)}
+          />
           <button type="submit" className="btn btn-primary w-full" disabled={request.isPending}>
             Send the link
           </button>

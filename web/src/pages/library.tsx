@@ -16,7 +16,8 @@ export function paramsFrom(search: URLSearchParams): ListParams {
     ...defaultListParams,
     q: search.get('q') ?? '',
     sort: sort && SORTS.includes(sort) ? sort : defaultListParams.sort,
-    dir: search.get('dir') === 'asc' ? 'asc' : search.get('dir') === 'desc' ? 'desc' : sort === 'title' ? 'asc' : 'desc',
+    dir:
+      search.get('dir') === 'asc' ? 'asc' : search.get('dir') === 'desc' ? 'desc' : sort === 'title' ? 'asc' : 'desc',
     page: Number.isInteger(page) && page > 0 ? page : 1,
   };
 }

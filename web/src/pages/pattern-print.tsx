@@ -12,13 +12,14 @@ import { ChartView } from '../components/chart-view.js';
 import { TallyPanel } from '../components/tally-panel.js';
 import { QueryError } from '../components/query-error.js';
 
-export const patternPrintLoader =
-  (queryClient: QueryClient) =>
-  async (args: LoaderFunctionArgs) => {
-    const { id, version } = patternParams(args);
-    await Promise.all([queryClient.ensureQueryData(patternQuery(id, version)), queryClient.ensureQueryData(tallyQuery(id, version))]);
-    return { id, version };
-  };
+export const patternPrintLoader = (queryClient: QueryClient) => async (args: LoaderFunctionArgs) => {
+  const { id, version } = patternParams(args);
+  await Promise.all([
+    queryClient.ensureQueryData(patternQuery(id, version)),
+    queryClient.ensureQueryData(tallyQuery(id, version)),
+  ]);
+  return { id, version };
+};
 
 export function PatternPrintPage() {
   const { id, version } = useLoaderData() as { id: number; version?: number };

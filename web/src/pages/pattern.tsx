@@ -26,16 +26,14 @@ import { SourceListing } from '../components/source-listing.js';
 import { QueryError } from '../components/query-error.js';
 import { Section } from '../components/section.js';
 
-export const patternLoader =
-  (queryClient: QueryClient) =>
-  async (args: LoaderFunctionArgs) => {
-    const { id, version } = patternParams(args);
-    void queryClient.prefetchQuery(tallyQuery(id, version));
-    // The reader's place comes with the page, so the stepper does not jump once it arrives.
-    const place = getSession()?.user.role === 'admin' ? null : queryClient.ensureQueryData(placeQuery(id));
-    await Promise.all([queryClient.ensureQueryData(patternQuery(id, version)), place]);
-    return { id, version };
-  };
+export const patternLoader = (queryClient: QueryClient) => async (args: LoaderFunctionArgs) => {
+  const { id, version } = patternParams(args);
+  void queryClient.prefetchQuery(tallyQuery(id, version));
+  // The reader's place comes with the page, so the stepper does not jump once it arrives.
+  const place = getSession()?.user.role === 'admin' ? null : queryClient.ensureQueryData(placeQuery(id));
+  await Promise.all([queryClient.ensureQueryData(patternQuery(id, version)), place]);
+  return { id, version };
+};
 
 export function PatternPage() {
   const { id, version } = useLoaderData() as { id: number; version?: number };
@@ -75,7 +73,8 @@ function PatternBody({ detail, version }: { detail: PatternDetail; version?: num
           <h1 id="pattern-title">{detail.title}</h1>
           <p className="muted text-sm">
             Version {viewing}
-            {viewing !== detail.version ? ` (current is ${detail.version})` : ''} · {detail.layout} · by {detail.owner.name} · {countText(detail.diagnostics)}
+            {viewing !== detail.version ? ` (current is ${detail.version})` : ''} · {detail.layout} · by{' '}
+            {detail.owner.name} · {countText(detail.diagnostics)}
           </p>
         </div>
         <nav aria-label="Pattern actions" className="no-print ml-auto flex flex-wrap gap-2">
@@ -91,7 +90,11 @@ function PatternBody({ detail, version }: { detail: PatternDetail; version?: num
       </header>
       {viewing !== detail.version && (
         <p role="note" className="card warning-text">
-          You are looking at an older version. <Link className="link" to={`/patterns/${detail.id}`}>Show the current version</Link>.
+          You are looking at an older version.{' '}
+          <Link className="link" to={`/patterns/${detail.id}`}>
+            Show the current version
+          </Link>
+          .
         </p>
       )}
       <Section title="Chart and steps">
@@ -133,7 +136,10 @@ function PatternBody({ detail, version }: { detail: PatternDetail; version?: num
           <button
             type="button"
             className="btn"
-            onClick={() => window.confirm(`Delete “${detail.title}” and all its versions?`) && remove.mutate(undefined, { onSuccess: () => navigate('/library') })}
+            onClick={() =>
+              window.confirm(`Delete “${detail.title}” and all its versions?`) &&
+              remove.mutate(undefined, { onSuccess: () => navigate('/library') })
+            }
           >
             Delete this pattern
           </button>

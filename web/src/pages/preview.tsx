@@ -35,7 +35,11 @@ export function PreviewPage() {
         </p>
       </header>
       {state.diagnostics.length > 0 && (
-        <div role="alert" className={`card ${state.stale ? 'border-red-700 dark:border-red-300' : ''}`} data-testid="preview-diagnostics">
+        <div
+          role="alert"
+          className={`card ${state.stale ? 'border-red-700 dark:border-red-300' : ''}`}
+          data-testid="preview-diagnostics"
+        >
           <p className="mb-2 font-semibold">
             {countText(state.diagnostics)}
             {state.stale ? ' – the chart shows the last save without errors.' : ''}

@@ -15,7 +15,8 @@ export function ResetPasswordPage() {
   const fresh = useNewPassword();
   const submit = (e: FormEvent) => {
     e.preventDefault();
-    if (fresh.validate()) reset.mutate({ token, password: fresh.password }, { onSuccess: () => navigate('/library', { replace: true }) });
+    if (fresh.validate())
+      reset.mutate({ token, password: fresh.password }, { onSuccess: () => navigate('/library', { replace: true }) });
   };
   const expired = reset.error instanceof ApiError && reset.error.code === 'invalid-token';
   return (
@@ -24,7 +25,11 @@ export function ResetPasswordPage() {
       {!token && <p role="alert">This page needs the link from the e-mail.</p>}
       {expired ? (
         <p role="alert" className="error-text mb-4 font-semibold">
-          This link has been used or has expired. <Link className="link" to="/forgot-password">Ask for a new one</Link>.
+          This link has been used or has expired.{' '}
+          <Link className="link" to="/forgot-password">
+            Ask for a new one
+          </Link>
+          .
         </p>
       ) : (
         <FormError error={fresh.problem ? new Error(fresh.problem) : reset.error} />

@@ -6,7 +6,8 @@ import { useSignIn } from '../queries/auth.js';
 import { Field, FormError } from '../components/field.js';
 
 /** Only same-site paths, so a crafted link cannot send someone elsewhere after signing in. */
-const safeNext = (next: string | null): string => (next && next.startsWith('/') && !next.startsWith('//') ? next : '/library');
+const safeNext = (next: string | null): string =>
+  next && next.startsWith('/') && !next.startsWith('//') ? next : '/library';
 
 export function SignInPage() {
   const session = useSession();
@@ -33,7 +34,14 @@ export function SignInPage() {
         Sign in
       </h1>
       <FormError error={error} />
-      <Field label="E-mail" type="email" autoComplete="username" required value={email} onChange={(e) => setEmail(e.target.value)} />
+      <Field
+        label="E-mail"
+        type="email"
+        autoComplete="username"
+        required
+        value={email}
+        onChange={(e) => setEmail(e.target.value)}
+      />
       <Field
         label="Password"
         type="password"

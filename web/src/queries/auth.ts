@@ -26,7 +26,8 @@ export function useSignOut() {
 
 export const useRequestReset = () =>
   useMutation({
-    mutationFn: (email: string) => api<unknown>('/api/auth/reset-request', { method: 'POST', json: { email }, anonymous: true }),
+    mutationFn: (email: string) =>
+      api<unknown>('/api/auth/reset-request', { method: 'POST', json: { email }, anonymous: true }),
   });
 
 export const useResetPassword = () =>

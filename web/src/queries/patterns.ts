@@ -5,7 +5,15 @@
  */
 import { keepPreviousData, queryOptions, useMutation, useQueryClient } from '@tanstack/react-query';
 import { api, withQuery } from '../api/client.js';
-import type { CheckedFile, Page, PatternDetail, PatternSummary, TallyJson, UploadedItem, VersionInfo } from '../api/types.js';
+import type {
+  CheckedFile,
+  Page,
+  PatternDetail,
+  PatternSummary,
+  TallyJson,
+  UploadedItem,
+  VersionInfo,
+} from '../api/types.js';
 
 export type SortKey = 'updated' | 'title' | 'beads';
 export interface ListParams {
@@ -23,9 +31,11 @@ export const patternKeys = {
   lists: () => [...patternKeys.all, 'list'] as const,
   list: (params: ListParams) => [...patternKeys.lists(), params] as const,
   detail: (id: number) => [...patternKeys.all, 'detail', id] as const,
-  version: (id: number, version: number | undefined) => [...patternKeys.detail(id), 'version', version ?? 'current'] as const,
+  version: (id: number, version: number | undefined) =>
+    [...patternKeys.detail(id), 'version', version ?? 'current'] as const,
   versions: (id: number) => [...patternKeys.detail(id), 'versions'] as const,
-  tally: (id: number, version: number | undefined) => [...patternKeys.detail(id), 'tally', version ?? 'current'] as const,
+  tally: (id: number, version: number | undefined) =>
+    [...patternKeys.detail(id), 'tally', version ?? 'current'] as const,
 };
 
 export const patternListQuery = (params: ListParams) =>
@@ -57,7 +67,8 @@ export function useUploadPatterns() {
   const client = useQueryClient();
   return useMutation({
     mutationFn: (input: { files: File[] } | { source: string }) => {
-      if ('source' in input) return api<{ items: UploadedItem[] }>('/api/patterns', { method: 'POST', json: { source: input.source } });
+      if ('source' in input)
+        return api<{ items: UploadedItem[] }>('/api/patterns', { method: 'POST', json: { source: input.source } });
       const form = new FormData();
       for (const f of input.files) form.append('file', f, f.name);
       return api<{ items: UploadedItem[] }>('/api/patterns', { method: 'POST', body: form });
@@ -87,7 +98,11 @@ export function useDeletePattern(id: number) {
 export const useCheck = () =>
   useMutation({
     mutationFn: (input: { files: File[] } | { source: string }) => {
-      if ('source' in input) return api<{ files: CheckedFile[] }>('/api/check', { method: 'POST', json: { source: input.source, name: 'pasted.ffp' } });
+      if ('source' in input)
+        return api<{ files: CheckedFile[] }>('/api/check', {
+          method: 'POST',
+          json: { source: input.source, name: 'pasted.ffp' },
+        });
       const form = new FormData();
       for (const f of input.files) form.append('file', f, f.name);
       return api<{ files: CheckedFile[] }>('/api/check', { method: 'POST', body: form });

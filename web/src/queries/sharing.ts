@@ -18,13 +18,19 @@ function useAccessMutation<I, O>(id: number, fn: (input: I) => Promise<O>) {
   return useMutation({
     mutationFn: fn,
     onSuccess: () =>
-      Promise.all([client.invalidateQueries({ queryKey: accessKeys.detail(id) }), client.invalidateQueries({ queryKey: patternKeys.lists() })]),
+      Promise.all([
+        client.invalidateQueries({ queryKey: accessKeys.detail(id) }),
+        client.invalidateQueries({ queryKey: patternKeys.lists() }),
+      ]),
   });
 }
 
 export const useCreateShare = (id: number) =>
   useAccessMutation(id, (input: { expiresInDays?: number }) =>
-    api<{ id: number; token: string; url: string; expiresAt: string | null }>(`/api/patterns/${id}/shares`, { method: 'POST', json: input }),
+    api<{ id: number; token: string; url: string; expiresAt: string | null }>(`/api/patterns/${id}/shares`, {
+      method: 'POST',
+      json: input,
+    }),
   );
 
 export const useRevokeShare = (id: number) =>
@@ -32,7 +38,10 @@ export const useRevokeShare = (id: number) =>
 
 export const useInviteTester = (id: number) =>
   useAccessMutation(id, (input: { email: string; name?: string }) =>
-    api<{ tester: { id: number; name: string; email: string }; created: boolean }>(`/api/patterns/${id}/invites`, { method: 'POST', json: input }),
+    api<{ tester: { id: number; name: string; email: string }; created: boolean }>(`/api/patterns/${id}/invites`, {
+      method: 'POST',
+      json: input,
+    }),
   );
 
 export const useRemoveTester = (id: number) =>

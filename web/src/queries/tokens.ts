@@ -14,7 +14,8 @@ export const tokensQuery = () =>
 export function useCreateToken() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (input: { name: string; expiresInDays?: number }) => api<{ token: string; item?: AccessToken }>('/api/tokens', { method: 'POST', json: input }),
+    mutationFn: (input: { name: string; expiresInDays?: number }) =>
+      api<{ token: string; item?: AccessToken }>('/api/tokens', { method: 'POST', json: input }),
     onSuccess: () => client.invalidateQueries({ queryKey: tokenKeys.all }),
   });
 }

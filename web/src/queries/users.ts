@@ -21,7 +21,8 @@ export const outboxQuery = () =>
 export function useSetRole() {
   const client = useQueryClient();
   return useMutation({
-    mutationFn: (input: { id: number; role: Role }) => api<User>(`/api/users/${input.id}`, { method: 'PATCH', json: { role: input.role } }),
+    mutationFn: (input: { id: number; role: Role }) =>
+      api<User>(`/api/users/${input.id}`, { method: 'PATCH', json: { role: input.role } }),
     onSuccess: () => client.invalidateQueries({ queryKey: userKeys.all }),
   });
 }
