@@ -14,9 +14,17 @@ const UNITS = 50;
 
 /** A round of `rounds` rounds of UNITS units each, two colours in stripes: about 2 * UNITS beads a round. */
 export function roundPattern(rounds: number): string {
-  const lines = ['title: Bench Round', 'designer: Sable Quint', 'layout: round', 'colors:', '  A #2E6F8E teal', '  B #F4F1EA chalk'];
+  const lines = [
+    'title: Bench Round',
+    'designer: Sable Quint',
+    'layout: round',
+    'colors:',
+    '  A #2E6F8E teal',
+    '  B #F4F1EA chalk',
+  ];
   lines.push(`round 1: AAAA (ABA)x${UNITS - 2} AB`);
-  for (let r = 2; r <= rounds; r++) lines.push(`round ${r}: ${r % 2 ? 'ABA' : 'BAB'} (${r % 2 ? 'AB' : 'BA'})x${UNITS - 2} A`);
+  for (let r = 2; r <= rounds; r++)
+    lines.push(`round ${r}: ${r % 2 ? 'ABA' : 'BAB'} (${r % 2 ? 'AB' : 'BA'})x${UNITS - 2} A`);
   return `${lines.join('\n')}\n`;
 }
 

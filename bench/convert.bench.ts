@@ -24,7 +24,8 @@ export function smallPattern(i: number): string {
   const pick = (n: number, r: number) => Array.from({ length: n }, (_, j) => keys[(i + r + j) % keys.length]).join('');
   const lines = [`title: Sample ${i}`, 'designer: Orla Fenwick', 'colors:', ...colors];
   lines.push(`row 1: ${pick(4, 0)} ${Array.from({ length: units - 1 }, (_, u) => pick(3, u)).join(' ')}`);
-  for (let r = 2; r <= rows; r++) lines.push(`row ${r}: ${pick(3, r)} ${Array.from({ length: units - 1 }, (_, u) => pick(2, r + u)).join(' ')}`);
+  for (let r = 2; r <= rows; r++)
+    lines.push(`row ${r}: ${pick(3, r)} ${Array.from({ length: units - 1 }, (_, u) => pick(2, r + u)).join(' ')}`);
   return `${lines.join('\n')}\n`;
 }
 
@@ -36,7 +37,8 @@ async function timed(fn: () => Promise<unknown>): Promise<number> {
 
 async function convertOnce(root: string, jobs: number): Promise<void> {
   const summary = await convertPaths(['in'], { out: 'out', cwd: root, jobs, force: true });
-  if (summary.converted !== FILES) throw new Error(`converted ${summary.converted} of ${FILES}: ${summary.files.find((f) => f.message)?.message}`);
+  if (summary.converted !== FILES)
+    throw new Error(`converted ${summary.converted} of ${FILES}: ${summary.files.find((f) => f.message)?.message}`);
 }
 
 const bench: Bench = {
@@ -45,7 +47,8 @@ const bench: Bench = {
     const root = await mkdtemp(join(tmpdir(), 'fourfold-bench-'));
     try {
       await mkdir(join(root, 'in'));
-      for (let i = 0; i < FILES; i++) await writeFile(join(root, 'in', `p${String(i).padStart(4, '0')}.ffp`), smallPattern(i));
+      for (let i = 0; i < FILES; i++)
+        await writeFile(join(root, 'in', `p${String(i).padStart(4, '0')}.ffp`), smallPattern(i));
       // Warm this thread's modules, which --jobs 1 uses; workers start cold either way.
       await convertPaths(['in/p0000.ffp'], { out: 'warm', cwd: root, jobs: 1, force: true });
 
@@ -68,8 +71,20 @@ const bench: Bench = {
         }
       });
       return [
-        { name: `convert ${FILES} patterns (svg,png,md,json): --jobs 1 vs --jobs 2 (speed-up)`, value: one, baseline: two, unit: 'ms', goal: { atLeast: 1.7 } },
-        { name: `convert ${FILES} patterns, all ${availableParallelism()} cores, vs reading each and writing files of its outputs' sizes`, value: all, baseline, unit: 'ms', goal: { atMost: 5 } },
+        {
+          name: `convert ${FILES} patterns (svg,png,md,json): --jobs 1 vs --jobs 2 (speed-up)`,
+          value: one,
+          baseline: two,
+          unit: 'ms',
+          goal: { atLeast: 1.7 },
+        },
+        {
+          name: `convert ${FILES} patterns, all ${availableParallelism()} cores, vs reading each and writing files of its outputs' sizes`,
+          value: all,
+          baseline,
+          unit: 'ms',
+          goal: { atMost: 5 },
+        },
       ];
     } finally {
       await rm(root, { recursive: true, force: true });

@@ -19,7 +19,12 @@ export function renderSummary(summary: ConvertSummary): string {
   ];
   const width = Math.max(...rows.map(([label]) => label.length));
   const out = rows.map(([label, n]) => `  ${label.padEnd(width)}  ${String(n).padStart(5)}`);
-  if (failed.length > 0) out.push('', 'Failed:', ...failed.map((f) => `  ${f.message ?? f.rel}${f.unchanged ? ' (unchanged since the last run)' : ''}`));
+  if (failed.length > 0)
+    out.push(
+      '',
+      'Failed:',
+      ...failed.map((f) => `  ${f.message ?? f.rel}${f.unchanged ? ' (unchanged since the last run)' : ''}`),
+    );
   if (broken.length > 0) out.push('', 'Not read or written:', ...broken.map((f) => `  ${f.message ?? f.rel}`));
   return `${out.join('\n')}\n`;
 }
@@ -30,7 +35,14 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
     io.stderr.write('fourfold: convert needs --out DIR\n');
     return EXIT_FAILURE;
   }
-  const bar = io.stderr.isTTY ? new SingleBar({ format: 'converting [{bar}] {value}/{total} files', stream: process.stderr, hideCursor: true, clearOnComplete: true }) : null;
+  const bar = io.stderr.isTTY
+    ? new SingleBar({
+        format: 'converting [{bar}] {value}/{total} files',
+        stream: process.stderr,
+        hideCursor: true,
+        clearOnComplete: true,
+      })
+    : null;
   const summary = await convertPaths(cmd.operands, {
     out,
     cwd: io.cwd,

@@ -54,16 +54,30 @@ export const stampPath = (outDir: string, rel: string): string => `${outBase(out
 const outBase = (outDir: string, rel: string): string =>
   join(outDir, rel.endsWith(PATTERN_EXT) ? rel.slice(0, -PATTERN_EXT.length) : rel);
 
-const errorLine = (rel: string, d: Diagnostic): string => `${rel}:${d.range.line}:${d.range.column}: error[${d.id}]: ${d.message}`;
+const errorLine = (rel: string, d: Diagnostic): string =>
+  `${rel}:${d.range.line}:${d.range.column}: error[${d.id}]: ${d.message}`;
 
 async function upToDate(task: ConvertTask, hash: string): Promise<Stamp | null> {
-  const stamp = await readFile(stampPath(task.outDir, task.rel), 'utf8').then((t) => JSON.parse(t) as Stamp, () => null);
+  const stamp = await readFile(stampPath(task.outDir, task.rel), 'utf8').then(
+    (t) => JSON.parse(t) as Stamp,
+    () => null,
+  );
   if (stamp?.hash !== hash) return null;
-  const present = await Promise.all(stamp.outputs.map((o) => stat(join(dirname(stampPath(task.outDir, task.rel)), o)).then(() => true, () => false)));
+  const present = await Promise.all(
+    stamp.outputs.map((o) =>
+      stat(join(dirname(stampPath(task.outDir, task.rel)), o)).then(
+        () => true,
+        () => false,
+      ),
+    ),
+  );
   return present.every(Boolean) ? stamp : null;
 }
 
-async function outputsOf(model: Model, formats: readonly OutputFormat[]): Promise<Array<[OutputFormat, string | Uint8Array]>> {
+async function outputsOf(
+  model: Model,
+  formats: readonly OutputFormat[],
+): Promise<Array<[OutputFormat, string | Uint8Array]>> {
   const out: Array<[OutputFormat, string | Uint8Array]> = [];
   if (formats.includes('svg') || formats.includes('png')) {
     const chart = await renderChartFiles(model, { png: formats.includes('png'), dpi: DEFAULT_DPI });
@@ -83,7 +97,10 @@ export async function convertOne(task: ConvertTask): Promise<FileResult> {
     return { rel: task.rel, status: 'io-error', message: cannotRead(task.rel, error).replace(/^fourfold: /, '') };
   }
   const formats = OUTPUT_FORMATS.filter((f) => task.formats.includes(f));
-  const hash = createHash('sha256').update(`${STAMP_VERSION}\0${formats.join(',')}\0${DEFAULT_DPI}\0`).update(bytes).digest('hex');
+  const hash = createHash('sha256')
+    .update(`${STAMP_VERSION}\0${formats.join(',')}\0${DEFAULT_DPI}\0`)
+    .update(bytes)
+    .digest('hex');
   if (!task.force) {
     const stamp = await upToDate(task, hash);
     if (stamp?.error !== undefined) return { rel: task.rel, status: 'failed', message: stamp.error, unchanged: true };
@@ -94,7 +111,11 @@ export async function convertOne(task: ConvertTask): Promise<FileResult> {
   try {
     text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
   } catch {
-    return { rel: task.rel, status: 'failed', message: `${task.rel}:1:1: error[not-text]: this file is not UTF-8 text` };
+    return {
+      rel: task.rel,
+      status: 'failed',
+      message: `${task.rel}:1:1: error[not-text]: this file is not UTF-8 text`,
+    };
   }
   const { value, diagnostics } = compile(text);
   const firstError = diagnostics.find((d) => d.severity === 'error');
@@ -104,7 +125,11 @@ export async function convertOne(task: ConvertTask): Promise<FileResult> {
     outputs = await outputsOf(value.model, formats);
   } catch (error) {
     // A bug in a renderer, not the user's: say so, and go on with the other files.
-    return { rel: task.rel, status: 'failed', message: `${task.rel}: internal error while rendering: ${(error as Error).message}` };
+    return {
+      rel: task.rel,
+      status: 'failed',
+      message: `${task.rel}: internal error while rendering: ${(error as Error).message}`,
+    };
   }
   try {
     for (const [format, data] of outputs) await writeFileAtomic(`${base}.${format}`, data);
@@ -117,7 +142,13 @@ export async function convertOne(task: ConvertTask): Promise<FileResult> {
     // The stamp goes last: a run cut short before it simply converts the file again.
     await writeFileAtomic(stampPath(task.outDir, task.rel), `${JSON.stringify(stamp)}\n`);
   } catch (error) {
-    return { rel: task.rel, status: 'io-error', message: `cannot write outputs of '${task.rel}': ${(error as Error).message}` };
+    return {
+      rel: task.rel,
+      status: 'io-error',
+      message: `cannot write outputs of '${task.rel}': ${(error as Error).message}`,
+    };
   }
-  return hasErrors(diagnostics) && firstError ? { rel: task.rel, status: 'failed', message: errorLine(task.rel, firstError) } : { rel: task.rel, status: 'converted' };
+  return hasErrors(diagnostics) && firstError
+    ? { rel: task.rel, status: 'failed', message: errorLine(task.rel, firstError) }
+    : { rel: task.rel, status: 'converted' };
 }

@@ -47,7 +47,10 @@ async function walk(dir: string): Promise<string[]> {
     .sort();
 }
 
-export async function findInputs(paths: readonly string[], cwd: string): Promise<{ inputs: Input[]; problems: InputProblem[] }> {
+export async function findInputs(
+  paths: readonly string[],
+  cwd: string,
+): Promise<{ inputs: Input[]; problems: InputProblem[] }> {
   const inputs: Input[] = [];
   const problems: InputProblem[] = [];
   const byRel = new Map<string, string>();
@@ -55,7 +58,10 @@ export async function findInputs(paths: readonly string[], cwd: string): Promise
     const seen = byRel.get(rel);
     if (seen === file) return;
     if (seen !== undefined) {
-      problems.push({ path, message: `its outputs would overwrite those of '${toSlash(relative(cwd, seen))}' (both are '${rel}' under --out)` });
+      problems.push({
+        path,
+        message: `its outputs would overwrite those of '${toSlash(relative(cwd, seen))}' (both are '${rel}' under --out)`,
+      });
       return;
     }
     byRel.set(rel, file);

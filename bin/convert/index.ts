@@ -47,7 +47,12 @@ const workerFile = fileURLToPath(new URL('./worker.js', import.meta.url));
 async function runAll(tasks: ConvertTask[], jobs: number, onResult: (r: FileResult) => void): Promise<FileResult[]> {
   if (jobs > 1 && tasks.length > 1 && existsSync(workerFile)) {
     const threads = Math.min(jobs, tasks.length);
-    const pool = new Piscina<ConvertTask, FileResult>({ filename: workerFile, minThreads: threads, maxThreads: threads, idleTimeout: 1000 });
+    const pool = new Piscina<ConvertTask, FileResult>({
+      filename: workerFile,
+      minThreads: threads,
+      maxThreads: threads,
+      idleTimeout: 1000,
+    });
     try {
       return await Promise.all(tasks.map((task) => pool.run(task).then((r) => (onResult(r), r))));
     } finally {
@@ -76,9 +81,10 @@ export async function convertPaths(paths: readonly string[], options: ConvertOpt
   const tasks = inputs.map((input) => ({ ...input, outDir, formats, force: options.force === true }));
   options.onStart?.(tasks.length);
   const results = await runAll(tasks, options.jobs ?? availableParallelism(), options.onResult ?? (() => {}));
-  const files = [...results, ...problems.map((p): FileResult => ({ rel: p.path, status: 'io-error', message: `'${p.path}': ${p.message}` }))].sort((a, b) =>
-    a.rel < b.rel ? -1 : a.rel > b.rel ? 1 : 0,
-  );
+  const files = [
+    ...results,
+    ...problems.map((p): FileResult => ({ rel: p.path, status: 'io-error', message: `'${p.path}': ${p.message}` })),
+  ].sort((a, b) => (a.rel < b.rel ? -1 : a.rel > b.rel ? 1 : 0));
   const count = (status: FileResult['status']) => files.filter((f) => f.status === status).length;
   const ioErrors = count('io-error');
   const failed = count('failed');

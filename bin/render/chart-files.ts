@@ -22,7 +22,10 @@ export interface ChartFiles {
   diagnostics: Diagnostic[];
 }
 
-export async function renderChartSvg(model: Model, options: SceneOptions = {}): Promise<{ svg: string; diagnostics: Diagnostic[] }> {
+export async function renderChartSvg(
+  model: Model,
+  options: SceneOptions = {},
+): Promise<{ svg: string; diagnostics: Diagnostic[] }> {
   const scene = buildScene(model, options);
   const svg = sceneToSvg(scene.value, await embeddedFonts(scene.value.glyphs));
   return { svg, diagnostics: scene.diagnostics };

@@ -69,7 +69,10 @@ export function fontFiles(): Promise<string[]> {
       const hash = createHash('sha256').update(bytes).digest('hex').slice(0, 16);
       const dir = join(tmpdir(), 'fourfold-fonts');
       const file = join(dir, `jetbrains-mono-${weight}-${hash}.ttf`);
-      const present = await stat(file).then((s) => s.size === bytes.length, () => false);
+      const present = await stat(file).then(
+        (s) => s.size === bytes.length,
+        () => false,
+      );
       if (!present) {
         await mkdir(dir, { recursive: true });
         const temp = `${file}.${process.pid}.${Math.random().toString(36).slice(2)}.tmp`;

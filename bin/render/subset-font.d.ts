@@ -4,5 +4,9 @@ declare module 'subset-font' {
     targetFormat?: 'sfnt' | 'truetype' | 'woff' | 'woff2';
     keepAllGlyphs?: boolean;
   }
-  export default function subsetFont(font: Buffer | Uint8Array, text: string | null, options?: SubsetOptions): Promise<Buffer>;
+  export default function subsetFont(
+    font: Buffer | Uint8Array,
+    text: string | null,
+    options?: SubsetOptions,
+  ): Promise<Buffer>;
 }

@@ -6,7 +6,16 @@
  * otherwise allocate tens of thousands of short-lived arrays.
  */
 import { round2 } from './geometry.js';
-import type { BeadPrim, DataAttrs, HatchPattern, PathPrim, Primitive, RectPrim, Scene, TextPrim } from './scene-types.js';
+import type {
+  BeadPrim,
+  DataAttrs,
+  HatchPattern,
+  PathPrim,
+  Primitive,
+  RectPrim,
+  Scene,
+  TextPrim,
+} from './scene-types.js';
 
 /** An attribute value; undefined leaves the attribute out. */
 export type AttrValue = string | number | undefined;
@@ -55,11 +64,35 @@ type TextFields = Pick<TextPrim, 'id' | 'x' | 'y' | 'size' | 'text' | 'color' | 
 const TEXT_NAMES = ['id', 'class', 'x', 'y', 'font-size', 'fill', 'text-anchor', 'font-weight', ...DATA_NAMES];
 
 function text(sink: SvgSink, p: TextFields, cls: string, data: DataAttrs | null): void {
-  const values: AttrValue[] = [p.id, cls, p.x, p.y, p.size, p.color, p.anchor === 'start' ? undefined : p.anchor, p.bold ? 'bold' : undefined];
+  const values: AttrValue[] = [
+    p.id,
+    cls,
+    p.x,
+    p.y,
+    p.size,
+    p.color,
+    p.anchor === 'start' ? undefined : p.anchor,
+    p.bold ? 'bold' : undefined,
+  ];
   sink.element('text', TEXT_NAMES, data ? values.concat(dataValues(data)) : values, p.text);
 }
 
-const BEAD_NAMES = ['id', 'class', 'x', 'y', 'width', 'height', 'rx', 'transform', 'fill', 'stroke', 'stroke-width', 'data-bead', 'data-unit', 'data-row'];
+const BEAD_NAMES = [
+  'id',
+  'class',
+  'x',
+  'y',
+  'width',
+  'height',
+  'rx',
+  'transform',
+  'fill',
+  'stroke',
+  'stroke-width',
+  'data-bead',
+  'data-unit',
+  'data-row',
+];
 
 function bead(sink: SvgSink, p: BeadPrim): void {
   sink.element('rect', BEAD_NAMES, [
@@ -80,7 +113,21 @@ function bead(sink: SvgSink, p: BeadPrim): void {
   ]);
   if (p.label) {
     const { label } = p;
-    text(sink, { id: `${p.id}-key`, x: label.x, y: label.y, size: label.size, text: label.text, color: label.color, anchor: 'middle', bold: true }, 'ff-bead-label', null);
+    text(
+      sink,
+      {
+        id: `${p.id}-key`,
+        x: label.x,
+        y: label.y,
+        size: label.size,
+        text: label.text,
+        color: label.color,
+        anchor: 'middle',
+        bold: true,
+      },
+      'ff-bead-label',
+      null,
+    );
   }
 }
 
@@ -89,10 +136,31 @@ const RECT_NAMES = ['id', 'class', 'x', 'y', 'width', 'height', 'fill', 'stroke'
 function rect(sink: SvgSink, p: RectPrim): void {
   const fill = typeof p.fill === 'string' ? p.fill : `url(#${p.fill.pattern})`;
   const stroke = p.stroke ?? undefined;
-  sink.element('rect', RECT_NAMES, [p.id, `ff-${p.role}`, p.x, p.y, p.width, p.height, fill, stroke, stroke === undefined ? undefined : p.strokeWidth, ...dataValues(p.data)]);
+  sink.element('rect', RECT_NAMES, [
+    p.id,
+    `ff-${p.role}`,
+    p.x,
+    p.y,
+    p.width,
+    p.height,
+    fill,
+    stroke,
+    stroke === undefined ? undefined : p.strokeWidth,
+    ...dataValues(p.data),
+  ]);
 }
 
-const PATH_NAMES = ['id', 'class', 'd', 'fill', 'stroke', 'stroke-width', 'stroke-dasharray', 'stroke-linecap', ...DATA_NAMES];
+const PATH_NAMES = [
+  'id',
+  'class',
+  'd',
+  'fill',
+  'stroke',
+  'stroke-width',
+  'stroke-dasharray',
+  'stroke-linecap',
+  ...DATA_NAMES,
+];
 
 function path(sink: SvgSink, p: PathPrim): void {
   const stroke = p.stroke ?? undefined;
@@ -152,7 +220,10 @@ export function sceneChildren(sink: SvgSink, scene: Scene, fonts: readonly Embed
   sink.element('title', ID, ['ff-chart-title'], scene.title);
   sink.element('desc', ID, ['ff-chart-desc'], scene.desc);
   if (fonts.length > 0) {
-    const css = fonts.map((f) => `@font-face{font-family:'${f.family}';font-weight:${f.weight};src:url(data:font/ttf;base64,${f.base64}) format('truetype');}`);
+    const css = fonts.map(
+      (f) =>
+        `@font-face{font-family:'${f.family}';font-weight:${f.weight};src:url(data:font/ttf;base64,${f.base64}) format('truetype');}`,
+    );
     sink.element('style', NONE, [], css.join('\n'));
   }
   if (scene.patterns.length > 0) {

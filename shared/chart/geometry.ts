@@ -91,7 +91,11 @@ export function arrowhead(tip: Point, dir: Point, size: number): string {
   const back = { x: tip.x - dir.x * size, y: tip.y - dir.y * size };
   const half = size * 0.55;
   return pointPath(
-    [tip, { x: back.x - dir.y * half, y: back.y + dir.x * half }, { x: back.x + dir.y * half, y: back.y - dir.x * half }],
+    [
+      tip,
+      { x: back.x - dir.y * half, y: back.y + dir.x * half },
+      { x: back.x + dir.y * half, y: back.y - dir.x * half },
+    ],
     true,
   );
 }

@@ -4,7 +4,17 @@
  */
 import type { Model, Unit, UnitStep } from '../model.js';
 import { labelColors } from './contrast.js';
-import { arrowhead, cellOutline, cornerJunction, nearImage, pointPath, round2, toPage, unitVector, type PageTransform } from './geometry.js';
+import {
+  arrowhead,
+  cellOutline,
+  cornerJunction,
+  nearImage,
+  pointPath,
+  round2,
+  toPage,
+  unitVector,
+  type PageTransform,
+} from './geometry.js';
 import type { BeadPrim, PathPrim, TextPrim } from './scene-types.js';
 import type { Theme } from './themes.js';
 
@@ -19,7 +29,10 @@ export function cells(model: Model, t: PageTransform, theme: Theme): PathPrim[] 
     kind: 'path',
     id: `ff-cell-${unit.id}`,
     role: 'cell',
-    d: pointPath(cellOutline(model, unit).map((p) => toPage(t, p)), true),
+    d: pointPath(
+      cellOutline(model, unit).map((p) => toPage(t, p)),
+      true,
+    ),
     fill: theme.cell,
     stroke: null,
     strokeWidth: 0,
@@ -58,7 +71,13 @@ export function beads(model: Model, t: PageTransform, theme: Theme): BeadPrim[] 
     };
     // A letter needs about one em along the bead; gap beads are often shorter.
     if (length >= thickness * 1.3) {
-      prim.label = { text: bead.color, color: ink.get(fill)!, size, x: prim.x, y: round2(centre.y + (size * CAP_HEIGHT) / 2) };
+      prim.label = {
+        text: bead.color,
+        color: ink.get(fill)!,
+        size,
+        x: prim.x,
+        y: round2(centre.y + (size * CAP_HEIGHT) / 2),
+      };
     }
     return prim;
   });

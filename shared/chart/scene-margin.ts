@@ -18,7 +18,16 @@ const SWATCH = 4.5;
 
 export const textWidth = (text: string, size: number): number => [...text].length * ADVANCE * size;
 
-const text = (id: string, role: TextPrim['role'], x: number, y: number, size: number, value: string, color: string, bold = false): TextPrim => ({
+const text = (
+  id: string,
+  role: TextPrim['role'],
+  x: number,
+  y: number,
+  size: number,
+  value: string,
+  color: string,
+  bold = false,
+): TextPrim => ({
   kind: 'text',
   id,
   role,
@@ -45,7 +54,12 @@ export const infoLine = (model: Model): string => {
   return `${beads.size} ${beads.shape} · finished ${round2(widthMm)} × ${round2(heightMm)} mm · ${model.beads.length} beads`;
 };
 
-export function titleBlock(model: Model, theme: Theme, left: number, top: number): { items: TextPrim[]; height: number; width: number } {
+export function titleBlock(
+  model: Model,
+  theme: Theme,
+  left: number,
+  top: number,
+): { items: TextPrim[]; height: number; width: number } {
   const lines: TextPrim[] = [];
   let y = top + TITLE * CAP_HEIGHT;
   lines.push(text('ff-title', 'title', left, y, TITLE, model.header.title, theme.ink, true));
@@ -60,7 +74,16 @@ export function titleBlock(model: Model, theme: Theme, left: number, top: number
 }
 
 /** Hatch kinds for the print legend, so colours stay apart in greyscale. */
-const HATCHES = ['M0 0', 'M0 0.5H1', 'M0.5 0V1', 'M0 1L1 0', 'M0 0L1 1', 'M0 0.5H1M0.5 0V1', 'M0 1L1 0M0 0L1 1', 'M0.35 0.5H0.65M0.5 0.35V0.65'];
+const HATCHES = [
+  'M0 0',
+  'M0 0.5H1',
+  'M0.5 0V1',
+  'M0 1L1 0',
+  'M0 0L1 1',
+  'M0 0.5H1M0.5 0V1',
+  'M0 1L1 0M0 0L1 1',
+  'M0.35 0.5H0.65M0.5 0.35V0.65',
+];
 
 export function hatch(index: number, theme: Theme): HatchPattern {
   const kind = index % HATCHES.length;
@@ -69,7 +92,13 @@ export function hatch(index: number, theme: Theme): HatchPattern {
   return { id: `ff-hatch-${index}`, size, d, stroke: theme.ink, strokeWidth: 0.22 };
 }
 
-export function legend(model: Model, theme: Theme, left: number, top: number, maxWidth: number): { items: Primitive[]; patterns: HatchPattern[]; height: number; width: number } {
+export function legend(
+  model: Model,
+  theme: Theme,
+  left: number,
+  top: number,
+  maxWidth: number,
+): { items: Primitive[]; patterns: HatchPattern[]; height: number; width: number } {
   const counts = countsByKey(model);
   const countWidth = Math.max(1, ...[...counts.values()].map((c) => String(c).length));
   const nameOf = (p: { name: string; hex: string }): string => p.name || p.hex;
@@ -83,22 +112,70 @@ export function legend(model: Model, theme: Theme, left: number, top: number, ma
     const x = left + (i % columns) * entryWidth;
     const y = top + Math.floor(i / columns) * rowHeight;
     const data = { key: entry.key };
-    items.push({ kind: 'rect', id: `ff-legend-${entry.key}`, role: 'legend-swatch', x: round2(x), y: round2(y), width: SWATCH, height: SWATCH, fill: entry.hex, stroke: theme.beadStroke, strokeWidth: theme.beadStrokeWidth, data });
+    items.push({
+      kind: 'rect',
+      id: `ff-legend-${entry.key}`,
+      role: 'legend-swatch',
+      x: round2(x),
+      y: round2(y),
+      width: SWATCH,
+      height: SWATCH,
+      fill: entry.hex,
+      stroke: theme.beadStroke,
+      strokeWidth: theme.beadStrokeWidth,
+      data,
+    });
     if (theme.patternedLegend) {
       const pattern = hatch(i, theme);
       patterns.push(pattern);
-      items.push({ kind: 'rect', id: `ff-legend-${entry.key}-hatch`, role: 'legend-hatch', x: round2(x), y: round2(y), width: SWATCH, height: SWATCH, fill: { pattern: pattern.id }, stroke: null, strokeWidth: 0, data });
+      items.push({
+        kind: 'rect',
+        id: `ff-legend-${entry.key}-hatch`,
+        role: 'legend-hatch',
+        x: round2(x),
+        y: round2(y),
+        width: SWATCH,
+        height: SWATCH,
+        fill: { pattern: pattern.id },
+        stroke: null,
+        strokeWidth: 0,
+        data,
+      });
     }
     const baseline = y + SWATCH / 2 + (LEGEND * CAP_HEIGHT) / 2;
-    const key = text(`ff-legend-${entry.key}-key`, 'legend-key', x + SWATCH / 2, baseline, LEGEND, entry.key, theme.patternedLegend ? theme.ink : labelColor(entry.hex), true);
+    const key = text(
+      `ff-legend-${entry.key}-key`,
+      'legend-key',
+      x + SWATCH / 2,
+      baseline,
+      LEGEND,
+      entry.key,
+      theme.patternedLegend ? theme.ink : labelColor(entry.hex),
+      true,
+    );
     key.anchor = 'middle';
     // On a hatched swatch the letter sits beside the swatch, where the ink has paper behind it.
     if (theme.patternedLegend) key.x = round2(x + SWATCH + 1.5 + (ADVANCE * LEGEND) / 2);
     items.push({ ...key, data });
     const nameX = x + SWATCH + 1.5 + (theme.patternedLegend ? 2 * ADVANCE * LEGEND : 0);
-    items.push({ ...text(`ff-legend-${entry.key}-name`, 'legend-name', nameX, baseline, LEGEND, nameOf(entry), theme.ink), data });
+    items.push({
+      ...text(`ff-legend-${entry.key}-name`, 'legend-name', nameX, baseline, LEGEND, nameOf(entry), theme.ink),
+      data,
+    });
     const countX = nameX + (nameWidth + 1 + countWidth) * ADVANCE * LEGEND;
-    items.push({ ...text(`ff-legend-${entry.key}-count`, 'legend-count', countX, baseline, LEGEND, String(counts.get(entry.key) ?? 0), theme.muted), anchor: 'end', data });
+    items.push({
+      ...text(
+        `ff-legend-${entry.key}-count`,
+        'legend-count',
+        countX,
+        baseline,
+        LEGEND,
+        String(counts.get(entry.key) ?? 0),
+        theme.muted,
+      ),
+      anchor: 'end',
+      data,
+    });
   });
   const rows = Math.ceil(model.palette.length / columns);
   return { items, patterns, height: rows * rowHeight, width: columns * entryWidth };
@@ -108,7 +185,16 @@ export function legend(model: Model, theme: Theme, left: number, top: number, ma
 export function scaleBar(theme: Theme, left: number, top: number): Primitive[] {
   const y = top + 1.5;
   return [
-    { kind: 'path', id: 'ff-scale-bar', role: 'scale-bar', d: `M${round2(left)} ${round2(top)} V${round2(y)} H${round2(left + 10)} V${round2(top)}`, fill: null, stroke: theme.ink, strokeWidth: 0.3, data: {} },
+    {
+      kind: 'path',
+      id: 'ff-scale-bar',
+      role: 'scale-bar',
+      d: `M${round2(left)} ${round2(top)} V${round2(y)} H${round2(left + 10)} V${round2(top)}`,
+      fill: null,
+      stroke: theme.ink,
+      strokeWidth: 0.3,
+      data: {},
+    },
     text('ff-scale-label', 'scale-label', left + 11.5, y, INFO, '1 cm', theme.muted),
   ];
 }

@@ -47,7 +47,9 @@ export function rowNumbers(model: Model, t: PageTransform, theme: Theme, chartLe
     const arrowDir = inRound ? dir : { x: dir.x < 0 ? -1 : 1, y: 0 };
     const arrowSize = inRound ? 0.12 * t.scale : size * 0.6;
     // Flat and tube: centred in the strip between the number and the chart.
-    const arrowMid = inRound ? { x: p.x + dir.x * 0.3 * t.scale, y: p.y + dir.y * 0.3 * t.scale } : { x: chartLeft - 0.75 * size, y: p.y };
+    const arrowMid = inRound
+      ? { x: p.x + dir.x * 0.3 * t.scale, y: p.y + dir.y * 0.3 * t.scale }
+      : { x: chartLeft - 0.75 * size, y: p.y };
     const arrowTip = { x: arrowMid.x + (arrowDir.x * arrowSize) / 2, y: arrowMid.y + (arrowDir.y * arrowSize) / 2 };
     out.push({
       kind: 'text',

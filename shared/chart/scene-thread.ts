@@ -13,7 +13,11 @@ import type { Primitive } from './scene-types.js';
 import type { Theme } from './themes.js';
 
 const dashFor = (kind: PassKind, scale: number): string | undefined =>
-  kind === 'pickup' ? undefined : kind === 'close' ? `${round2(0.1 * scale)} ${round2(0.05 * scale)}` : `${round2(0.03 * scale)} ${round2(0.05 * scale)}`;
+  kind === 'pickup'
+    ? undefined
+    : kind === 'close'
+      ? `${round2(0.1 * scale)} ${round2(0.05 * scale)}`
+      : `${round2(0.03 * scale)} ${round2(0.05 * scale)}`;
 
 /** The bead's two ends on the page, the `from` end first. */
 function ends(model: Model, beadId: number, from: number, t: PageTransform): [Point, Point] | null {

@@ -60,7 +60,19 @@ export function buildScene(model: Model, options: SceneOptions = {}): Result<Sce
 
   const items: Primitive[] = [];
   if (theme.background !== null) {
-    items.push({ kind: 'rect', id: 'ff-background', role: 'background', x: 0, y: 0, width, height, fill: theme.background, stroke: null, strokeWidth: 0, data: {} });
+    items.push({
+      kind: 'rect',
+      id: 'ff-background',
+      role: 'background',
+      x: 0,
+      y: 0,
+      width,
+      height,
+      fill: theme.background,
+      stroke: null,
+      strokeWidth: 0,
+      data: {},
+    });
   }
   items.push(...cells(model, t, theme), ...seam(model, t, theme), ...beads(model, t, theme));
   items.push(...failures(model, t, theme), ...cues(model, t, theme));

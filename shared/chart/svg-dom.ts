@@ -5,7 +5,15 @@
  * checks that on svgdom. The DOM comes from the container the caller passes.
  */
 import { SVG, type Dom, type Svg } from '@svgdotjs/svg.js';
-import { formatNumber, ROOT_NAMES, rootValues, sceneChildren, type AttrValue, type EmbeddedFont, type SvgSink } from './elements.js';
+import {
+  formatNumber,
+  ROOT_NAMES,
+  rootValues,
+  sceneChildren,
+  type AttrValue,
+  type EmbeddedFont,
+  type SvgSink,
+} from './elements.js';
 import type { Scene } from './scene-types.js';
 
 /** Added to every element of the highlighted unit (its cell, beads, cue and number). */
@@ -47,7 +55,11 @@ function domSink(root: Svg): SvgSink {
   };
 }
 
-export function drawScene(scene: Scene, container: Parameters<Svg['addTo']>[0], fonts: readonly EmbeddedFont[] = []): ChartHandle {
+export function drawScene(
+  scene: Scene,
+  container: Parameters<Svg['addTo']>[0],
+  fonts: readonly EmbeddedFont[] = [],
+): ChartHandle {
   const svg = SVG().addTo(container);
   // svg.js declares its own namespaces on a new root; the chart uses none of them.
   svg.attr('xmlns:svgjs', null).attr('xmlns:xlink', null).attr('version', null);

@@ -3,7 +3,15 @@
  * downloads. Plain string building: fast, and byte-identical for the same
  * scene and font.
  */
-import { formatNumber, ROOT_NAMES, rootValues, sceneChildren, type AttrValue, type EmbeddedFont, type SvgSink } from './elements.js';
+import {
+  formatNumber,
+  ROOT_NAMES,
+  rootValues,
+  sceneChildren,
+  type AttrValue,
+  type EmbeddedFont,
+  type SvgSink,
+} from './elements.js';
 import type { Scene } from './scene-types.js';
 
 export type { EmbeddedFont } from './elements.js';

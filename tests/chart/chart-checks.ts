@@ -21,7 +21,9 @@ export function checkSvg(svg: string, expectedBeads: number): void {
   expect(root.attrs.height).toMatch(/mm$/);
   expect(elements.find((e) => e.tag === 'title')?.text.length).toBeGreaterThan(0);
   expect(elements.filter((e) => 'data-bead' in e.attrs)).toHaveLength(expectedBeads);
-  expect(new Set(elements.filter((e) => 'data-bead' in e.attrs).map((e) => e.attrs['data-bead'])).size).toBe(expectedBeads);
+  expect(new Set(elements.filter((e) => 'data-bead' in e.attrs).map((e) => e.attrs['data-bead'])).size).toBe(
+    expectedBeads,
+  );
   // Self-contained: nothing refers outside the file.
   expect(elements.some((e) => e.tag === 'foreignObject' || e.tag === 'image' || e.tag === 'use')).toBe(false);
   expect(svg).not.toMatch(/href=|url\((?!#|data:)/);
@@ -30,7 +32,8 @@ export function checkSvg(svg: string, expectedBeads: number): void {
 /** Every key letter against its own bead: WCAG 2.x asks 4.5:1 of normal text. */
 export function checkLabelContrast(scene: Scene): void {
   for (const item of scene.items) {
-    if (item.kind === 'bead' && item.label) expect(contrastRatio(item.label.color, item.fill)).toBeGreaterThanOrEqual(4.5);
+    if (item.kind === 'bead' && item.label)
+      expect(contrastRatio(item.label.color, item.fill)).toBeGreaterThanOrEqual(4.5);
   }
 }
 
@@ -77,7 +80,10 @@ export function checkRaster(model: Model, scene: Scene, png: Buffer, dpi: number
       return { x, y, got, worst: Math.max(...got.map((g, k) => Math.abs(g - want[k]!))) };
     });
     const best = samples.reduce((a, b) => (b.worst < a.worst ? b : a));
-    if (best.worst > tolerance) expect.fail(`bead ${item.bead} at (${best.x}, ${best.y}) px: got rgb(${best.got.join(',')}), want ${hex.get(model.beads[item.bead]!.color)}`);
+    if (best.worst > tolerance)
+      expect.fail(
+        `bead ${item.bead} at (${best.x}, ${best.y}) px: got rgb(${best.got.join(',')}), want ${hex.get(model.beads[item.bead]!.color)}`,
+      );
     checked++;
   }
   expect(checked).toBeGreaterThan(0);

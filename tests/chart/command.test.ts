@@ -9,7 +9,11 @@ import { fakeIO } from '../cli/fake-io.js';
 import { BROKEN, FAN, TUBE } from '../convert/patterns.js';
 import { flatten, isWellFormed } from './svg-tree.js';
 
-const cmd = (name: string, operands: string[], options: Record<string, unknown> = {}) => ({ name, operands, options: { theme: 'light', scale: 'screen', dpi: 96, format: 'svg', ...options } });
+const cmd = (name: string, operands: string[], options: Record<string, unknown> = {}) => ({
+  name,
+  operands,
+  options: { theme: 'light', scale: 'screen', dpi: 96, format: 'svg', ...options },
+});
 
 let dir: string;
 beforeAll(async () => {
@@ -60,7 +64,9 @@ describe('fourfold chart', () => {
     expect(await chart(cmd('chart', ['-'], { format: 'json', numbers: true }), json)).toBe(0);
     const scene = JSON.parse(json.out());
     expect(scene.schema).toBe('fourfold.scene/1');
-    expect(scene.items.filter((p: { kind: string }) => p.kind === 'bead')).toHaveLength(compile(FAN).value.model.beads.length);
+    expect(scene.items.filter((p: { kind: string }) => p.kind === 'bead')).toHaveLength(
+      compile(FAN).value.model.beads.length,
+    );
   });
 
   test('a PNG is not written to a terminal', async () => {
@@ -77,12 +83,21 @@ describe('fourfold convert', () => {
     await writeFile(join(dir, 'in', 'fan.ffp'), FAN);
     await writeFile(join(dir, 'in', 'wren.ffp'), BROKEN);
     const io = fakeIO({ cwd: dir });
-    expect(await convert(cmd('convert', ['in'], { out: 'out', formats: ['svg'], format: 'text', jobs: 1 }), io)).toBe(1);
+    expect(await convert(cmd('convert', ['in'], { out: 'out', formats: ['svg'], format: 'text', jobs: 1 }), io)).toBe(
+      1,
+    );
     expect(io.out()).toMatch(/converted\s+1/);
     expect(io.out()).toMatch(/wren\.ffp:\d+:\d+: error\[bead-count\]/);
     const json = fakeIO({ cwd: dir });
-    expect(await convert(cmd('convert', ['in'], { out: 'out', formats: ['svg'], format: 'json', jobs: 1 }), json)).toBe(1);
+    expect(await convert(cmd('convert', ['in'], { out: 'out', formats: ['svg'], format: 'json', jobs: 1 }), json)).toBe(
+      1,
+    );
     const summary = JSON.parse(json.out());
-    expect([summary.schema, summary.converted, summary.skipped, summary.failed]).toEqual(['fourfold.convert/1', 0, 1, 1]);
+    expect([summary.schema, summary.converted, summary.skipped, summary.failed]).toEqual([
+      'fourfold.convert/1',
+      0,
+      1,
+      1,
+    ]);
   });
 });

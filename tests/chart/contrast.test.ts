@@ -33,7 +33,12 @@ describe('WCAG 2.x contrast', () => {
     expect(labelColor('#f4f1ea')).toBe('#000000');
     // Every grey and a sweep of hues: the better of black and white never falls below sqrt(21).
     for (let v = 0; v < 256; v++) {
-      for (const hex of [[v, v, v], [v, 255 - v, 128], [255, v, 0], [0, v, 255]].map((c) => `#${c.map((n) => n.toString(16).padStart(2, '0')).join('')}`)) {
+      for (const hex of [
+        [v, v, v],
+        [v, 255 - v, 128],
+        [255, v, 0],
+        [0, v, 255],
+      ].map((c) => `#${c.map((n) => n.toString(16).padStart(2, '0')).join('')}`)) {
         expect(contrastRatio(hex, labelColor(hex))).toBeGreaterThanOrEqual(Math.sqrt(21) - 1e-9);
       }
     }

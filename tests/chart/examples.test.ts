@@ -20,7 +20,11 @@ import { checkLabelContrast, checkParity, checkRaster, checkSvg } from './chart-
 
 const examplesDir = 'examples';
 const goldenDir = join('tests', 'chart', 'golden');
-const examples = existsSync(examplesDir) ? readdirSync(examplesDir, { recursive: true, encoding: 'utf8' }).filter((f) => f.endsWith('.ffp')).sort() : [];
+const examples = existsSync(examplesDir)
+  ? readdirSync(examplesDir, { recursive: true, encoding: 'utf8' })
+      .filter((f) => f.endsWith('.ffp'))
+      .sort()
+  : [];
 
 test('there are examples to check', () => {
   expect(examples.length).toBeGreaterThan(0);
@@ -43,7 +47,11 @@ describe.each(examples)('%s', (file) => {
   });
 
   test('every theme and option: labels at 4.5:1, svg.js on svgdom draws the same elements', async () => {
-    for (const options of [{}, { theme: 'dark' as const, numbers: true }, { theme: 'print' as const, scale: 'mm' as const, thread: 1 }]) {
+    for (const options of [
+      {},
+      { theme: 'dark' as const, numbers: true },
+      { theme: 'print' as const, scale: 'mm' as const, thread: 1 },
+    ]) {
       const scene = buildScene(model, options).value;
       checkLabelContrast(scene);
       const fonts = await embeddedFonts(scene.glyphs);

@@ -33,7 +33,11 @@ describe('the bundled font', () => {
       const at = 12 + i * 16;
       const tag = sfnt.toString('latin1', at, at + 4);
       tags.push(tag);
-      const [checksum, offset, length] = [sfnt.readUInt32BE(at + 4), sfnt.readUInt32BE(at + 8), sfnt.readUInt32BE(at + 12)];
+      const [checksum, offset, length] = [
+        sfnt.readUInt32BE(at + 4),
+        sfnt.readUInt32BE(at + 8),
+        sfnt.readUInt32BE(at + 12),
+      ];
       expect(tableChecksum(sfnt.subarray(offset, offset + length), tag === 'head'), tag).toBe(checksum);
     }
     expect(tags).toEqual([...tags].sort());

@@ -11,7 +11,10 @@ import { drawScene, type ChartHandle } from '../../shared/chart/svg-dom.js';
 const window = createSVGWindow();
 registerWindow(window, window.document);
 
-export function drawOnSvgdom(scene: Scene, fonts: readonly EmbeddedFont[] = []): { markup: string; handle: ChartHandle } {
+export function drawOnSvgdom(
+  scene: Scene,
+  fonts: readonly EmbeddedFont[] = [],
+): { markup: string; handle: ChartHandle } {
   const handle = drawScene(scene, window.document.documentElement, fonts);
   return { markup: handle.svg.node.outerHTML as string, handle };
 }

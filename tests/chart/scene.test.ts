@@ -27,7 +27,12 @@ describe('chart of a hand-made strip', () => {
   });
 
   test('labels meet 4.5:1 in every theme, with dark and light beads', () => {
-    const model = stripModel(6, [['A', '#000000', 'jet'], ['B', '#ffffff', 'snow'], ['C', '#767676', 'pewter'], ['D', '#ffcc00', 'sun']]);
+    const model = stripModel(6, [
+      ['A', '#000000', 'jet'],
+      ['B', '#ffffff', 'snow'],
+      ['C', '#767676', 'pewter'],
+      ['D', '#ffcc00', 'sun'],
+    ]);
     for (const theme of ['light', 'dark', 'print'] as const) checkLabelContrast(buildScene(model, { theme }).value);
   });
 
@@ -51,10 +56,13 @@ describe('chart of a hand-made strip', () => {
     const passes = elements.filter((e) => e.attrs.class === 'ff-thread');
     expect(passes.map((e) => e.attrs['data-pass'])).toEqual(model.thread.map((_, i) => String(i + 1)));
     expect(passes.map((e) => e.attrs['data-kind'])).toEqual(model.thread.map((p) => p.kind));
-    const dash = (kind: string) => new Set(passes.filter((e) => e.attrs['data-kind'] === kind).map((e) => e.attrs['stroke-dasharray'] ?? 'solid'));
+    const dash = (kind: string) =>
+      new Set(passes.filter((e) => e.attrs['data-kind'] === kind).map((e) => e.attrs['stroke-dasharray'] ?? 'solid'));
     expect([...dash('pickup')]).toEqual(['solid']);
     expect([...dash('close')]).not.toContain('solid');
-    expect(elements.filter((e) => e.attrs.class === 'ff-thread-number').map((e) => e.text)).toEqual(model.thread.map((_, i) => String(i + 1)));
+    expect(elements.filter((e) => e.attrs.class === 'ff-thread-number').map((e) => e.text)).toEqual(
+      model.thread.map((_, i) => String(i + 1)),
+    );
   });
 
   test('a thread row that does not exist is a diagnostic, not a crash', () => {
@@ -81,7 +89,11 @@ describe('chart of a hand-made strip', () => {
   });
 
   test('print theme: no page fill, a distinct hatch on every legend swatch after the first', () => {
-    const model = stripModel(3, [['A', '#111111', 'a'], ['B', '#222222', 'b'], ['C', '#333333', 'c']]);
+    const model = stripModel(3, [
+      ['A', '#111111', 'a'],
+      ['B', '#222222', 'b'],
+      ['C', '#333333', 'c'],
+    ]);
     const elements = flatten(sceneToSvg(buildScene(model, { theme: 'print' }).value));
     expect(elements.some((e) => e.attrs.class === 'ff-background')).toBe(false);
     const hatches = elements.filter((e) => e.tag === 'pattern').map((p) => elements[elements.indexOf(p) + 1]!.attrs.d);

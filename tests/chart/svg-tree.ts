@@ -36,8 +36,15 @@ export function flatten(svg: string): ParsedElement[] {
       const tag = Object.keys(node).find((k) => k !== ':@');
       if (tag === undefined || tag === '#text') continue;
       const children = (node[tag] as OrderedNode[]) ?? [];
-      const text = children.map((c) => (typeof c['#text'] === 'string' || typeof c['#text'] === 'number' ? String(c['#text']) : '')).join('');
-      out.push({ tag, attrs: { ...(node[':@'] ?? {}) }, text: children.some((c) => !('#text' in c)) ? '' : text, depth });
+      const text = children
+        .map((c) => (typeof c['#text'] === 'string' || typeof c['#text'] === 'number' ? String(c['#text']) : ''))
+        .join('');
+      out.push({
+        tag,
+        attrs: { ...(node[':@'] ?? {}) },
+        text: children.some((c) => !('#text' in c)) ? '' : text,
+        depth,
+      });
       walk(children, depth + 1);
     }
   };

@@ -13,7 +13,10 @@ const outDir = () => join(root, 'out');
 
 async function listFiles(dir: string): Promise<string[]> {
   const entries = await readdir(dir, { recursive: true, withFileTypes: true });
-  return entries.filter((e) => e.isFile()).map((e) => join(e.parentPath, e.name).slice(dir.length + 1)).sort();
+  return entries
+    .filter((e) => e.isFile())
+    .map((e) => join(e.parentPath, e.name).slice(dir.length + 1))
+    .sort();
 }
 
 const mtimes = async (files: string[]) => Promise.all(files.map(async (f) => (await stat(join(outDir(), f))).mtimeMs));
@@ -49,10 +52,13 @@ describe('convert a folder', () => {
     }
     // Nothing half-written: no temporary files left, and every output reads whole.
     expect(files.filter((f) => f.endsWith('.tmp'))).toEqual([]);
-    for (const f of files.filter((f) => f.endsWith('.svg'))) expect(isWellFormed(await readFile(join(outDir(), f), 'utf8'))).toBe(true);
-    for (const f of files.filter((f) => f.endsWith('.json'))) expect(JSON.parse(await readFile(join(outDir(), f), 'utf8')).schema).toBe('fourfold.model/1');
+    for (const f of files.filter((f) => f.endsWith('.svg')))
+      expect(isWellFormed(await readFile(join(outDir(), f), 'utf8'))).toBe(true);
+    for (const f of files.filter((f) => f.endsWith('.json')))
+      expect(JSON.parse(await readFile(join(outDir(), f), 'utf8')).schema).toBe('fourfold.model/1');
     // Source: PNG specification (W3C, 2003), section 5.2: the eight-byte signature.
-    for (const f of files.filter((f) => f.endsWith('.png'))) expect([...(await readFile(join(outDir(), f))).subarray(0, 8)]).toEqual([137, 80, 78, 71, 13, 10, 26, 10]);
+    for (const f of files.filter((f) => f.endsWith('.png')))
+      expect([...(await readFile(join(outDir(), f))).subarray(0, 8)]).toEqual([137, 80, 78, 71, 13, 10, 26, 10]);
     expect(await readFile(join(outDir(), 'fan.md'), 'utf8')).toContain('Linnet Fan');
   });
 

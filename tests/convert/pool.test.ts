@@ -19,7 +19,8 @@ let root: string;
 beforeAll(async () => {
   root = await mkdtemp(join(tmpdir(), 'fourfold-pool-'));
   await mkdir(join(root, 'in', 'deep'), { recursive: true });
-  for (let i = 0; i < 6; i++) await writeFile(join(root, 'in', `fan-${i}.ffp`), FAN.replace('Linnet Fan', `Linnet Fan ${i}`));
+  for (let i = 0; i < 6; i++)
+    await writeFile(join(root, 'in', `fan-${i}.ffp`), FAN.replace('Linnet Fan', `Linnet Fan ${i}`));
   await writeFile(join(root, 'in', 'deep', 'tube.ffp'), TUBE);
   await writeFile(join(root, 'in', 'broken.ffp'), BROKEN);
 });
@@ -35,7 +36,10 @@ test('two worker threads give the same outputs as one thread', { timeout: 60_000
   const b = await convertPaths(['in'], { out: 'single', cwd: root, jobs: 1 });
   expect([a.converted, a.failed, a.exitCode]).toEqual([7, 1, 1]);
   expect(a.files.map((f) => f.status)).toEqual(b.files.map((f) => f.status));
-  const files = (await readdir(join(root, 'pool'), { recursive: true })).filter((f) => /\.(svg|png|md|json)$/.test(f)).sort();
+  const files = (await readdir(join(root, 'pool'), { recursive: true }))
+    .filter((f) => /\.(svg|png|md|json)$/.test(f))
+    .sort();
   expect(files).toHaveLength(8 * 4);
-  for (const f of files) expect((await readFile(join(root, 'pool', f))).equals(await readFile(join(root, 'single', f))), f).toBe(true);
+  for (const f of files)
+    expect((await readFile(join(root, 'pool', f))).equals(await readFile(join(root, 'single', f))), f).toBe(true);
 });
