@@ -4,7 +4,6 @@
  */
 import type { Diagnostic, Fix, Severity, SourceRange } from './diagnostic.js';
 import type { Layout, UnitNode } from '../parser/ast.js';
-import type { FlatItem } from '../parser/expand.js';
 
 const BASE_BIT = 1;
 const FAR_BIT = 2;
@@ -93,8 +92,9 @@ export function misplacedMark(
   item: UnitNode,
   first: boolean,
   firstRow: boolean,
+  /** An unmarked unit follows in the row. */
+  plainAfter: boolean,
   i: number,
-  items: readonly FlatItem[],
 ): string | null {
   if (item.mark === '*') {
     if (layout !== 'flat') return `a fresh ring '*' is only used in flat pieces; this is a ${layout}`;
@@ -106,7 +106,7 @@ export function misplacedMark(
     if (first) return "an increase '+' shares the bead of the unit before it, so it cannot be a row's first unit";
     if (firstRow) return "row 1 has no row below it, so an increase '+' means nothing there; write the unit unmarked";
     if (layout === 'tube') return "a tube keeps the same number of units in every row, so it has no increases '+'";
-    if (layout === 'flat' && items.slice(i + 1).some((it) => it.type === 'unit' && it.mark !== '+'))
+    if (layout === 'flat' && plainAfter)
       return "in a flat piece an increase '+' can only stand at the end of a row, after the units built on the row before";
   }
   return null;

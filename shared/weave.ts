@@ -123,6 +123,8 @@ class Builder {
     let ptr = 0;
     let index = 0;
     const lastUnitAt = lastIndexOf(items, (it) => it.type === 'unit');
+    // Found once per row, so a row of many increases stays linear.
+    const lastPlainAt = lastIndexOf(items, (it) => it.type === 'unit' && it.mark !== '+');
     const firstUnitAt = items.findIndex((it) => it.type === 'unit');
 
     for (let i = 0; i < items.length; i++) {
@@ -144,7 +146,7 @@ class Builder {
       index++;
       const first = index === 1;
       const closing = this.closed && i === lastUnitAt && !first;
-      const misplaced = misplacedMark(w.layout, item, first, firstRow, i, items);
+      const misplaced = misplacedMark(w.layout, item, first, firstRow, i < lastPlainAt, i);
       const id = w.units.length;
       const unit: WeaveUnit = {
         row: n,
