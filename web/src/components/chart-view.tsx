@@ -24,6 +24,7 @@ export interface ChartViewProps {
 }
 
 export function ChartView({ model, dark, current, noted = [], onPick }: ChartViewProps) {
+  const figure = useRef<HTMLElement>(null);
   const host = useRef<HTMLDivElement>(null);
   const chart = useRef<ChartHandle | null>(null);
   const drag = useRef<{ x: number; y: number; box: Box; moved: boolean } | null>(null);
@@ -82,8 +83,9 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
     }
     const el = (e.target as Element).closest?.('[data-bead]');
     const info = el ? beadInfo(model, Number(el.getAttribute('data-bead'))) : null;
-    const hostRect = host.current!.getBoundingClientRect();
-    setHover(info ? { info, left: e.clientX - hostRect.left + 12, top: e.clientY - hostRect.top + 12 } : null);
+    // The card is placed in the figure (which holds the toolbar too), just below and right of the pointer.
+    const box = figure.current!.getBoundingClientRect();
+    setHover(info ? { info, left: e.clientX - box.left + 12, top: e.clientY - box.top + 16 } : null);
   };
   const onPointerUp = (e: PointerEvent) => {
     const wasDrag = drag.current?.moved;
@@ -111,7 +113,7 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
   };
 
   return (
-    <figure className="relative">
+    <figure ref={figure} className="relative">
       <div className="no-print mb-2 flex flex-wrap gap-2" role="toolbar" aria-label="Chart zoom">
         <button type="button" className="btn" onClick={() => zoom(1.25)} aria-label="Zoom in">
           +
@@ -151,7 +153,7 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
           role="tooltip"
           data-testid="bead-tooltip"
           className="pointer-events-none absolute z-10 rounded border border-slate-400 bg-white p-2 text-xs shadow dark:bg-slate-800"
-          style={{ left: hover.left, top: hover.top + 40 }}
+          style={{ left: hover.left, top: hover.top }}
         >
           {hover.info.lines.map((l) => (
             <p key={l}>{l}</p>
