@@ -4,8 +4,10 @@
  * same content was already converted with the same options.
  */
 import { createHash } from 'node:crypto';
+import { existsSync, readFileSync } from 'node:fs';
 import { readFile, stat } from 'node:fs/promises';
 import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { compile } from '../../shared/compile.js';
 import type { Diagnostic } from '../../shared/diagnostic.js';
 import { hasErrors } from '../../shared/diagnostic.js';
@@ -39,8 +41,18 @@ export interface FileResult {
   unchanged?: boolean;
 }
 
-/** Bump when the outputs for the same input would change, so old stamps stop matching. */
+/** Bump when the stamp's meaning changes; a new release of the tool also makes old stamps stop matching. */
 const STAMP_VERSION = 1;
+
+/** The version in the nearest package.json above this file (the same from the sources and from dist/). */
+function toolVersion(): string {
+  for (let dir = dirname(fileURLToPath(import.meta.url)); ; dir = dirname(dir)) {
+    const file = join(dir, 'package.json');
+    if (existsSync(file)) return String((JSON.parse(readFileSync(file, 'utf8')) as { version?: unknown }).version);
+    if (dirname(dir) === dir) return 'unknown';
+  }
+}
+const TOOL_VERSION = toolVersion();
 
 interface Stamp {
   schema: 'fourfold.convert-stamp/1';
@@ -98,7 +110,7 @@ export async function convertOne(task: ConvertTask): Promise<FileResult> {
   }
   const formats = OUTPUT_FORMATS.filter((f) => task.formats.includes(f));
   const hash = createHash('sha256')
-    .update(`${STAMP_VERSION}\0${formats.join(',')}\0${DEFAULT_DPI}\0`)
+    .update(`${STAMP_VERSION}\0${TOOL_VERSION}\0${formats.join(',')}\0${DEFAULT_DPI}\0`)
     .update(bytes)
     .digest('hex');
   if (!task.force) {

@@ -1,7 +1,7 @@
 /**
  * Scene to a live SVG drawn with svg.js, for the web app's interactive
- * chart. It walks the same element tree as the text emitter (elements.ts),
- * so the drawing holds the same elements, ids and attributes; a parity test
+ * chart. The same walk as the text emitter's (elements.ts) drives it, so
+ * the drawing holds the same elements, ids and attributes; a parity test
  * checks that on svgdom. The DOM comes from the container the caller passes.
  */
 import { SVG, type Dom, type Svg } from '@svgdotjs/svg.js';
