@@ -89,5 +89,8 @@ export interface Parsed {
 export function parseTokens(tokens: IToken[]): Parsed {
   parser.input = tokens;
   const cst = parser.pattern();
-  return { cst, errors: parser.errors.map((e) => ({ token: e.token, message: e.message })) };
+  const errors = parser.errors.map((e) => ({ token: e.token, message: e.message }));
+  // The shared parser would otherwise hold on to the last file's tokens until the next parse.
+  parser.input = [];
+  return { cst, errors };
 }

@@ -38,10 +38,12 @@ interface RowLine {
 }
 type Line = KeyLine | ColorLine | RowLine;
 
+/** Shared by every absent child list, so a missing one allocates nothing. */
+const NONE: readonly never[] = [];
 /** One past the token's last code unit. */
 const endOf = (t: IToken): number => t.startOffset + t.image.length;
-const tokens = (ctx: Children, name: string): IToken[] => (ctx[name] as IToken[] | undefined) ?? [];
-const nodes = (ctx: Children, name: string): CstNode[] => (ctx[name] as CstNode[] | undefined) ?? [];
+const tokens = (ctx: Children, name: string): readonly IToken[] => (ctx[name] as IToken[] | undefined) ?? NONE;
+const nodes = (ctx: Children, name: string): readonly CstNode[] => (ctx[name] as CstNode[] | undefined) ?? NONE;
 /** Tokens inserted by error recovery have no text behind them. */
 const real = (t: IToken | undefined): t is IToken =>
   t !== undefined && !t.isInsertedInRecovery && !Number.isNaN(t.startOffset);
@@ -171,10 +173,11 @@ class AstBuilder extends BaseVisitor {
   private items(ctx: Children, row: boolean): ItemNode[] {
     const toks = tokens(ctx, 'BodyToken');
     const groups = nodes(ctx, 'group');
-    const strays = row ? tokens(ctx, 'RParen') : [];
+    const strays = row ? tokens(ctx, 'RParen') : NONE;
     const items: ItemNode[] = [];
-    let ordered: (IToken | CstNode)[] = groups.length === 0 ? toks : mergeByOffset<IToken | CstNode>(toks, groups);
-    if (strays.length > 0) ordered = mergeByOffset(ordered, strays);
+    let ordered: readonly (IToken | CstNode)[] =
+      groups.length === 0 ? toks : mergeByOffset<IToken | CstNode>(toks, groups);
+    if (strays.length > 0) ordered = mergeByOffset<IToken | CstNode>(ordered, strays);
     for (const el of ordered) {
       if (!('image' in el)) {
         const group = this.visit(el) as GroupNode | undefined;
@@ -327,7 +330,7 @@ class AstBuilder extends BaseVisitor {
 }
 
 /** Merge two lists of CST elements, each already in source order, by start offset. */
-function mergeByOffset<T extends IToken | CstNode>(a: T[], b: T[]): T[] {
+function mergeByOffset<T extends IToken | CstNode>(a: readonly T[], b: readonly T[]): T[] {
   const out: T[] = [];
   let i = 0;
   let j = 0;
