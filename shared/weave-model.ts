@@ -128,12 +128,16 @@ export interface Compiled {
   model: Model;
 }
 
-/** Same diagnostic twice (a limit both the parser and the engine meet) is shown once. */
+/**
+ * One diagnostic per check and place: where the parser and the engine both
+ * check a thing (a misplaced mark, a size limit), the parser's wording, which
+ * comes first, is kept.
+ */
 function merge(...lists: Diagnostic[][]): Diagnostic[] {
   const seen = new Set<string>();
   const out: Diagnostic[] = [];
   for (const d of lists.flat()) {
-    const key = `${d.id}@${d.range.offset}:${d.range.endOffset}:${d.message}`;
+    const key = `${d.id}@${d.range.offset}:${d.range.endOffset}`;
     if (seen.has(key)) continue;
     seen.add(key);
     out.push(d);

@@ -45,3 +45,17 @@ test('a fault inside the engine is a diagnostic, not a crash', () => {
   expect(diagnostics.map((d) => d.id)).toEqual(['internal']);
   expect(value.model.units).toEqual([]);
 });
+
+test('a check both the parser and the engine make is reported once', () => {
+  const tube = [
+    'title: T',
+    'layout: tube',
+    'colors:',
+    '  A #ffffff',
+    'round 1: AAAA AAA AA',
+    'round 2: AAA +AAA AA A',
+    '',
+  ].join('\n');
+  const { diagnostics } = compile(tube);
+  expect(diagnostics.filter((d) => d.id === 'misplaced-mark').length).toBe(1);
+});
