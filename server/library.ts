@@ -58,11 +58,11 @@ export async function listPatterns(db: Db, ctx: AuthContext, query: LibraryQuery
            (SELECT COUNT(*) FROM share_links s WHERE s.patternId = p.id AND s.revokedAt IS NULL
               AND (s.expiresAt IS NULL OR s.expiresAt > UTC_TIMESTAMP())) AS links,
            (SELECT COUNT(*) FROM invitations i2 WHERE i2.patternId = p.id) AS testers
-    FROM (SELECT p.id FROM patterns p WHERE ${where}
-          ORDER BY ${SORT_COLUMN[query.sort]} ${dir}, p.id ${dir} LIMIT ? OFFSET ?) AS chosen
-    JOIN patterns p ON p.id = chosen.id
+    FROM patterns p
     JOIN users u ON u.id = p.ownerId
-    ORDER BY ${SORT_COLUMN[query.sort]} ${dir}, p.id ${dir}`;
+    WHERE ${where}
+    ORDER BY ${SORT_COLUMN[query.sort]} ${dir}, p.id ${dir}
+    LIMIT ? OFFSET ?`;
   const [rows, counted] = await Promise.all([
     db.sequelize.query<Row>(page, { replacements: [...params, query.pageSize, (query.page - 1) * query.pageSize], type: QueryTypes.SELECT }),
     db.sequelize.query<{ n: number | bigint }>(`SELECT COUNT(*) AS n FROM patterns p WHERE ${where}`, { replacements: params, type: QueryTypes.SELECT }),
