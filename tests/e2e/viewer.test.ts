@@ -166,7 +166,7 @@ describe('designer and tester in the browser', () => {
   let tp: Page;
   let notedUnit = '';
   it('lets the tester choose a password, see only that pattern, and leave a note on a unit', async () => {
-    tester = await browser.newContext({ viewport: { width: 390, height: 844 } });
+    tester = await browser.newContext({ viewport: { width: 360, height: 740 } });
     tester.setDefaultTimeout(10_000);
     tp = await tester.newPage();
     const testerErrors = watchErrors(tp);
@@ -234,6 +234,19 @@ describe('designer and tester in the browser', () => {
     expect(await page.getByTestId('count-changes').textContent()).toContain('beads: 31 → 38 (+7)');
     expect(await page.getByTestId('chart').locator('[data-bead]').count()).toBe(38);
     await shot(page, 'versions');
+    expect(errors).toEqual([]);
+  });
+
+  it('lays the pattern out for print with every row of steps and the small-parts caution', async () => {
+    await page.getByRole('link', { name: 'Print' }).click();
+    await page.getByRole('heading', { name: 'Steps' }).waitFor();
+    expect(await page.getByRole('heading', { name: /^Row \d+: / }).count()).toBe(5);
+    expect(await page.getByText(/Seed beads and needles are small parts/).count()).toBeGreaterThan(0);
+    expect(await page.getByTestId('chart').locator('[data-bead]').count()).toBe(38);
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.getByRole('button', { name: 'Print' }).isVisible()).toBe(false);
+    await shot(page, 'print');
+    await page.emulateMedia({ media: 'screen' });
     expect(errors).toEqual([]);
   });
 

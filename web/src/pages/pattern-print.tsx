@@ -1,8 +1,7 @@
-/** A print layout: chart, legend (in the chart), tally and steps on paper, with the small-parts caution. */
+/** A print layout: chart, legend (in the chart), tally and steps on paper; the tally's kit part carries the small-parts caution. */
 import { useMemo } from 'react';
 import { useQuery, type QueryClient } from '@tanstack/react-query';
 import { useLoaderData, type LoaderFunctionArgs } from 'react-router-dom';
-import { SMALL_PARTS_CAUTION } from '../../../shared/caution.js';
 import { buildSteps } from '../../../shared/steps.js';
 import { rowHeading, unitHeading, unitSentences } from '../../../shared/steps-render.js';
 import { patternQuery, tallyQuery } from '../queries/patterns.js';
@@ -63,7 +62,6 @@ export function PatternPrintPage() {
           </div>
         ))}
       </section>
-      <p className="border-t pt-2 text-sm">{SMALL_PARTS_CAUTION}</p>
     </article>
   );
 }
