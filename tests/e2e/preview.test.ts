@@ -4,6 +4,8 @@
  * chart and shows the diagnostics on top.
  */
 import { mkdtemp, rm, writeFile } from 'node:fs/promises';
+import { spawn } from 'node:child_process';
+import { once } from 'node:events';
 import { request } from 'node:http';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -128,5 +130,22 @@ describe('live preview', () => {
       req.end();
     });
     expect(status).toBe(403);
+  });
+
+  it('runs as `fourfold preview FILE --port 0`: prints its loopback URL, serves the file, and stops cleanly on Ctrl-C', async () => {
+    const child = spawn(process.execPath, ['bin/fourfold.js', 'preview', file, '--port', '0', '--format', 'json'], {
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
+    let out = '';
+    child.stdout.setEncoding('utf8').on('data', (chunk: string) => (out += chunk));
+    while (!out.includes('\n')) await once(child.stdout, 'data');
+    const { url } = JSON.parse(out) as { url: string };
+    expect(url).toMatch(/^http:\/\/127\.0\.0\.1:\d+\/preview$/);
+    const state = (await (await fetch(url.replace('/preview', '/api/preview/state'))).json()) as PreviewState;
+    expect(state.file).toBe('live-strip.ffp');
+    expect(state.model?.header.title).toBe('Live Strip');
+    child.kill('SIGINT');
+    const [code] = (await once(child, 'exit')) as [number | null];
+    expect(code).toBe(0);
   });
 });
