@@ -250,6 +250,20 @@ describe('designer and tester in the browser', () => {
     expect(errors).toEqual([]);
   });
 
+  it('creates a personal access token for the CLI, shown once, that the API accepts', async () => {
+    await page.getByRole('link', { name: 'Account' }).click();
+    await page.getByLabel('Token name').fill('studio laptop');
+    await page.getByRole('button', { name: 'Create token' }).click();
+    const token = (await page.getByTestId('new-token').textContent())!.trim();
+    const res = await fetch(`${viewer.url}/api/patterns`, { headers: { Authorization: `Bearer ${token}` } });
+    expect(res.status).toBe(200);
+    await page.reload();
+    await page.getByRole('list', { name: 'Your tokens' }).getByText('studio laptop').waitFor();
+    expect(await page.getByText(token).count()).toBe(0);
+    await shot(page, 'account');
+    expect(errors).toEqual([]);
+  });
+
   it('shows the tester a not-found page for a pattern that was not shared with them', async () => {
     const login = await fetch(`${viewer.url}/api/auth/login`, {
       method: 'POST',
