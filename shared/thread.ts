@@ -180,7 +180,7 @@ class Sim {
       this.diagnostics.push({
         severity: 'error',
         id: 'no-passage',
-        message: `row ${u.row}, unit ${u.index}: the thread cannot reach this unit's start through ${PASSAGE_LIMIT} or fewer beads already in place`,
+        message: `${this.w.rows[u.rowIndex]!.word} ${u.row}, unit ${u.index}: the thread cannot reach this unit's start through ${PASSAGE_LIMIT} or fewer beads already in place`,
         range: u.range,
       });
       start = { corner: (u.shared === 0 ? [0] : startCorners(u.shared, dir))[0]!, route: [] };

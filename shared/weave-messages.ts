@@ -19,10 +19,12 @@ export function weaveDiagnostic(
   return hint === undefined ? { severity, id, message, range } : { severity, id, message, range, hint };
 }
 
-function sharesPhrase(shared: number, mark: string, first: boolean, firstRow: boolean): string {
+function sharesPhrase(shared: number, mark: string, where: Where): string {
   if (shared === 0) {
     if (mark === '*') return 'a fresh ring shares no bead';
-    return firstRow && first ? 'the first unit of row 1 shares no bead' : 'this unit shares no bead';
+    return where.firstRow && where.first
+      ? `the first unit of ${where.word} 1 shares no bead`
+      : 'this unit shares no bead';
   }
   const parts: string[] = [];
   if (shared & NEAR_BIT) parts.push('its near bead');
@@ -34,6 +36,7 @@ function sharesPhrase(shared: number, mark: string, first: boolean, firstRow: bo
 
 interface Where {
   layout: Layout;
+  word: 'row' | 'round';
   first: boolean;
   firstRow: boolean;
   last: boolean;
@@ -79,7 +82,7 @@ export function beadCountDiagnostic(
   const spaced = [...unit.keys].join(' ');
   const { text, fix } = suggestion(shared, expected, unit, where);
   const message =
-    `row ${row}, unit ${index}: ${sharesPhrase(shared, unit.mark, where.first, where.firstRow)}, so it takes ${expected} new bead${expected === 1 ? '' : 's'}; ` +
+    `${where.word} ${row}, unit ${index}: ${sharesPhrase(shared, unit.mark, where)}, so it takes ${expected} new bead${expected === 1 ? '' : 's'}; ` +
     `${written} ${written === 1 ? 'is' : 'are'} written (${spaced}). ${text}`;
   const d: Diagnostic = { severity: 'error', id: 'bead-count', message, range: unit.range };
   if (fix) d.fix = fix;
@@ -89,6 +92,7 @@ export function beadCountDiagnostic(
 /** Why a unit's mark is not allowed where it stands (NOTATION.md section 2, "Marks"), or null. */
 export function misplacedMark(
   layout: Layout,
+  word: 'row' | 'round',
   item: UnitNode,
   first: boolean,
   firstRow: boolean,
@@ -99,12 +103,13 @@ export function misplacedMark(
   if (item.mark === '*') {
     if (layout !== 'flat') return `a fresh ring '*' is only used in flat pieces; this is a ${layout}`;
     if (firstRow)
-      return "row 1 starts with an unmarked unit; '*' starts a later row one place beyond the end of the row before";
+      return `${word} 1 starts with an unmarked unit; '*' starts a later row one place beyond the end of the row before`;
     if (!first || i > 0) return "a fresh ring '*' can only be the first unit of a row";
   }
   if (item.mark === '+') {
     if (first) return "an increase '+' shares the bead of the unit before it, so it cannot be a row's first unit";
-    if (firstRow) return "row 1 has no row below it, so an increase '+' means nothing there; write the unit unmarked";
+    if (firstRow)
+      return `${word} 1 has no ${word} below it, so an increase '+' means nothing there; write the unit unmarked`;
     if (layout === 'tube') return "a tube keeps the same number of units in every row, so it has no increases '+'";
     if (layout === 'flat' && plainAfter)
       return "in a flat piece an increase '+' can only stand at the end of a row, after the units built on the row before";
@@ -112,8 +117,8 @@ export function misplacedMark(
   return null;
 }
 
-export function misplacedSkip(firstRow: boolean): string {
+export function misplacedSkip(firstRow: boolean, word: 'row' | 'round'): string {
   return firstRow
-    ? "row 1 has no row below it to pass over, so it cannot skip '-'"
+    ? `${word} 1 has no ${word} below it to pass over, so it cannot skip '-'`
     : "in a flat piece a skip '-' can only stand at the start or the end of a row";
 }

@@ -88,7 +88,7 @@ class Builder {
         if (expanded.diagnostics.length > 0 || used + count > UNIT_LIMIT) {
           this.error(
             'too-large',
-            `the pattern expands past ${UNIT_LIMIT.toLocaleString('en')} units; it is built up to row ${n - 1}`,
+            `the pattern expands past ${UNIT_LIMIT.toLocaleString('en')} units; it is built up to ${node.word} ${n - 1}`,
             node.range,
           );
           return;
@@ -120,6 +120,7 @@ class Builder {
     const slots = prev ? this.slotsOf(prev.row) : [];
     const firstRow = prev === null;
     const below = prev ? prev.row.row : n - 1;
+    const word = node.word;
     let ptr = 0;
     let index = 0;
     const lastUnitAt = lastIndexOf(items, (it) => it.type === 'unit');
@@ -132,12 +133,16 @@ class Builder {
       if (item.type === 'skip') {
         const inside = firstUnitAt !== -1 && i > firstUnitAt && i < lastUnitAt;
         if (firstRow || (!this.closed && inside)) {
-          this.error('misplaced-mark', misplacedSkip(firstRow), item.range);
+          this.error('misplaced-mark', misplacedSkip(firstRow, word), item.range);
           return { row, complete: false };
         }
         if (ptr >= slots.length) {
           if (prev?.complete !== false)
-            this.error('no-base-left', `row ${n}: this skip has no bead of row ${below} left to pass over`, item.range);
+            this.error(
+              'no-base-left',
+              `${word} ${n}: this skip has no bead of ${word} ${below} left to pass over`,
+              item.range,
+            );
           return { row, complete: false };
         }
         ptr++;
@@ -146,7 +151,7 @@ class Builder {
       index++;
       const first = index === 1;
       const closing = this.closed && i === lastUnitAt && !first;
-      const misplaced = misplacedMark(w.layout, item, first, firstRow, i < lastPlainAt, i);
+      const misplaced = misplacedMark(w.layout, word, item, first, firstRow, i < lastPlainAt, i);
       const id = w.units.length;
       const unit: WeaveUnit = {
         row: n,
@@ -184,7 +189,7 @@ class Builder {
         }
         this.error(
           'no-base-left',
-          `row ${n}, unit ${index}: this unit needs a base bead, but row ${below} has none left to build on`,
+          `${word} ${n}, unit ${index}: this unit needs a base bead, but ${word} ${below} has none left to build on`,
           item.range,
           first ? undefined : "Mark an increase with '+' if a new unit beyond the row's end is meant.",
         );
@@ -194,7 +199,7 @@ class Builder {
       if (closing) shared |= 1 << FAR;
       const expected = 4 - popcount(shared);
       if (item.keys.length !== expected) {
-        const where = { layout: w.layout, first, firstRow, last: i === lastUnitAt };
+        const where = { layout: w.layout, word, first, firstRow, last: i === lastUnitAt };
         this.diagnostics.push(beadCountDiagnostic(n, index, shared, expected, item, where));
         return { row, complete: false };
       }
@@ -215,7 +220,7 @@ class Builder {
         weaveDiagnostic(
           'warning',
           'uncovered-base',
-          `row ${n} leaves ${left} bead${left === 1 ? '' : 's'} of row ${below} uncovered`,
+          `${word} ${n} leaves ${left} bead${left === 1 ? '' : 's'} of ${word} ${below} uncovered`,
           node.range,
           "Build on them, or write '-' for each bead the row passes over.",
         ),

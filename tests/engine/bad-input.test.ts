@@ -43,7 +43,7 @@ describe('bead-count', () => {
       /shares a base bead, so it takes 3 new beads; 4 are written \(A A A A\)\. Mark a fresh ring with '\*'/,
     );
     expect(message('tube', ['AAAA AAA AAA'])).toMatch(
-      /unit 3: this unit shares its near bead and its far bead \(the row closes on its first unit\), so it takes 2 new beads; 3 are written/,
+      /^round 1, unit 3: this unit shares its near bead and its far bead \(the row closes on its first unit\), so it takes 2 new beads; 3 are written/,
     );
     expect(message('tube', ['AAAA AAA AA', 'AAA AA AA'])).toMatch(
       /shares its near bead, a base bead and its far bead .* so it takes 1 new bead; 2 are written/,
