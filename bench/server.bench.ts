@@ -48,7 +48,17 @@ interface Load {
 async function load(url: string, token: string): Promise<Load> {
   const { stdout } = await run(
     process.execPath,
-    [autocannonBin, '-c', String(CONNECTIONS), '-d', String(SECONDS), '-H', `Authorization=Bearer ${token}`, '--json', url],
+    [
+      autocannonBin,
+      '-c',
+      String(CONNECTIONS),
+      '-d',
+      String(SECONDS),
+      '-H',
+      `Authorization=Bearer ${token}`,
+      '--json',
+      url,
+    ],
     { maxBuffer: 16 * 1024 * 1024 },
   );
   const result = JSON.parse(stdout) as { latency: { p99: number }; errors: number; non2xx: number; timeouts: number };
@@ -67,7 +77,11 @@ const bench: Bench = {
       await seedDemo(db, { password: 'bench-password' });
       const designer = (await db.models.User.findOne({ where: { email: 'designer@example.com' } }))!;
       for (let start = 0; start < PATTERNS; start += 50) {
-        await createPatterns(db, designer, Array.from({ length: 50 }, (_, k) => ({ name: 'b.ffp', source: band(start + k) })));
+        await createPatterns(
+          db,
+          designer,
+          Array.from({ length: 50 }, (_, k) => ({ name: 'b.ffp', source: band(start + k) })),
+        );
       }
       // A database that has been in use has table statistics; fresh bulk inserts may not yet.
       await db.sequelize.query('ANALYZE TABLE patterns, versions, share_links, invitations');
@@ -91,8 +105,19 @@ const bench: Bench = {
           }
           const median = (xs: Load[]) => xs.map((x) => x.p99).sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
           const errors = [...health, ...route].reduce((sum, x) => sum + x.errors, 0);
-          figures.push({ name: `${name} p99 vs /api/health, ${CONNECTIONS} connections`, value: median(route), baseline: median(health), unit: 'ms', goal: { atMost: 4 } });
-          figures.push({ name: `${name} errors and non-2xx answers`, value: errors, unit: 'requests', goal: { atMost: 0 } });
+          figures.push({
+            name: `${name} p99 vs /api/health, ${CONNECTIONS} connections`,
+            value: median(route),
+            baseline: median(health),
+            unit: 'ms',
+            goal: { atMost: 4 },
+          });
+          figures.push({
+            name: `${name} errors and non-2xx answers`,
+            value: errors,
+            unit: 'requests',
+            goal: { atMost: 0 },
+          });
         }
       } finally {
         server.closeAllConnections();

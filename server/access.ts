@@ -12,7 +12,11 @@ import type { Access, Sharing } from './serialize.js';
 
 const noPattern = () => notFound('No such pattern.');
 
-export async function visiblePattern(models: Models, ctx: AuthContext, id: number): Promise<{ pattern: PatternInstance; access: Access }> {
+export async function visiblePattern(
+  models: Models,
+  ctx: AuthContext,
+  id: number,
+): Promise<{ pattern: PatternInstance; access: Access }> {
   const pattern = await models.Pattern.findByPk(id, { include: [{ model: models.User, as: 'owner' }] });
   if (!pattern) throw noPattern();
   const { user } = ctx;
@@ -62,9 +66,16 @@ export async function sharingOf(models: Models, ids: number[]): Promise<Map<numb
       group: ['patternId'],
       raw: true,
     }),
-    models.Invitation.findAll({ attributes: ['patternId', count], where: { patternId: ids }, group: ['patternId'], raw: true }),
+    models.Invitation.findAll({
+      attributes: ['patternId', count],
+      where: { patternId: ids },
+      group: ['patternId'],
+      raw: true,
+    }),
   ]);
-  for (const row of links as unknown as { patternId: number; n: number }[]) result.get(row.patternId)!.links = Number(row.n);
-  for (const row of testers as unknown as { patternId: number; n: number }[]) result.get(row.patternId)!.testers = Number(row.n);
+  for (const row of links as unknown as { patternId: number; n: number }[])
+    result.get(row.patternId)!.links = Number(row.n);
+  for (const row of testers as unknown as { patternId: number; n: number }[])
+    result.get(row.patternId)!.testers = Number(row.n);
   return result;
 }

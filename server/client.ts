@@ -19,7 +19,9 @@ export const configFile = (env: Record<string, string | undefined>): string =>
 export async function loadSaved(env: Record<string, string | undefined>): Promise<Saved | null> {
   try {
     const data = JSON.parse(await readFile(configFile(env), 'utf8')) as Partial<Saved>;
-    return typeof data.server === 'string' && typeof data.token === 'string' ? { server: data.server, token: data.token } : null;
+    return typeof data.server === 'string' && typeof data.token === 'string'
+      ? { server: data.server, token: data.token }
+      : null;
   } catch {
     return null;
   }
@@ -44,7 +46,13 @@ export class ApiError extends Error {
   }
 }
 
-export async function call<T>(server: string, token: string | null, method: string, path: string, body?: unknown): Promise<T> {
+export async function call<T>(
+  server: string,
+  token: string | null,
+  method: string,
+  path: string,
+  body?: unknown,
+): Promise<T> {
   let res: Response;
   try {
     res = await fetch(`${server}${path}`, {
@@ -57,7 +65,11 @@ export async function call<T>(server: string, token: string | null, method: stri
       body: body === undefined ? undefined : JSON.stringify(body),
     });
   } catch (error) {
-    throw new ApiError(0, 'unreachable', `cannot reach ${server}: ${(error as Error).cause ?? (error as Error).message}`);
+    throw new ApiError(
+      0,
+      'unreachable',
+      `cannot reach ${server}: ${(error as Error).cause ?? (error as Error).message}`,
+    );
   }
   if (res.status === 204) return undefined as T;
   const text = await res.text();

@@ -36,8 +36,10 @@ export const errorHandler =
     let http: HttpError;
     if (error instanceof HttpError) http = error;
     else if (error instanceof multer.MulterError) http = fromMulter(error);
-    else if ((error as { type?: string }).type === 'entity.too.large') http = new HttpError(413, 'too-large', 'The request body is too large.');
-    else if ((error as { type?: string }).type === 'entity.parse.failed') http = new HttpError(400, 'invalid-input', 'The body is not valid JSON.');
+    else if ((error as { type?: string }).type === 'entity.too.large')
+      http = new HttpError(413, 'too-large', 'The request body is too large.');
+    else if ((error as { type?: string }).type === 'entity.parse.failed')
+      http = new HttpError(400, 'invalid-input', 'The body is not valid JSON.');
     else {
       log(error);
       http = new HttpError(500, 'internal', 'Something went wrong on the server.');

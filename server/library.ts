@@ -64,12 +64,22 @@ export async function listPatterns(db: Db, ctx: AuthContext, query: LibraryQuery
     ORDER BY ${SORT_COLUMN[query.sort]} ${dir}, p.id ${dir}
     LIMIT ? OFFSET ?`;
   const [rows, counted] = await Promise.all([
-    db.sequelize.query<Row>(page, { replacements: [...params, query.pageSize, (query.page - 1) * query.pageSize], type: QueryTypes.SELECT }),
-    db.sequelize.query<{ n: number | bigint }>(`SELECT COUNT(*) AS n FROM patterns p WHERE ${where}`, { replacements: params, type: QueryTypes.SELECT }),
+    db.sequelize.query<Row>(page, {
+      replacements: [...params, query.pageSize, (query.page - 1) * query.pageSize],
+      type: QueryTypes.SELECT,
+    }),
+    db.sequelize.query<{ n: number | bigint }>(`SELECT COUNT(*) AS n FROM patterns p WHERE ${where}`, {
+      replacements: params,
+      type: QueryTypes.SELECT,
+    }),
   ]);
   const items = rows.map((r) =>
     toSummary(
-      { ...r, colors: typeof r.colors === 'string' ? (JSON.parse(r.colors) as PatternColor[]) : r.colors, owner: { id: r.ownerId, name: r.ownerName } },
+      {
+        ...r,
+        colors: typeof r.colors === 'string' ? (JSON.parse(r.colors) as PatternColor[]) : r.colors,
+        owner: { id: r.ownerId, name: r.ownerName },
+      },
       { links: Number(r.links), testers: Number(r.testers) },
     ),
   );
@@ -81,7 +91,12 @@ export async function listPatterns(db: Db, ctx: AuthContext, query: LibraryQuery
  * given), in one query: what the chart and other views need before anything
  * is rendered. `ctx` null means the pattern came from a valid share link.
  */
-export async function viewableVersionId(db: Db, ctx: AuthContext | null, patternId: number, number?: number): Promise<number | null> {
+export async function viewableVersionId(
+  db: Db,
+  ctx: AuthContext | null,
+  patternId: number,
+  number?: number,
+): Promise<number | null> {
   const seen = ctx ? visibility(ctx) : { sql: '1 = 1', params: [] };
   const rows = await db.sequelize.query<{ id: number }>(
     `SELECT v.id FROM patterns p JOIN versions v ON v.patternId = p.id AND v.number = COALESCE(?, p.currentVersion)

@@ -30,7 +30,10 @@ function decodeWords(header: string): string {
   return header.replace(/=\?utf-8\?([bq])\?([^?]*)\?=/gi, (_m, enc: string, text: string) =>
     enc.toLowerCase() === 'b'
       ? Buffer.from(text, 'base64').toString('utf8')
-      : Buffer.from(text.replace(/_/g, ' ').replace(/=([0-9a-f]{2})/gi, (_x, h: string) => String.fromCharCode(parseInt(h, 16))), 'latin1').toString('utf8'),
+      : Buffer.from(
+          text.replace(/_/g, ' ').replace(/=([0-9a-f]{2})/gi, (_x, h: string) => String.fromCharCode(parseInt(h, 16))),
+          'latin1',
+        ).toString('utf8'),
   );
 }
 
@@ -58,7 +61,13 @@ async function startCatcher(keep: (mail: Omit<Mail, 'id'>) => void): Promise<{ p
       stream.on('end', () => {
         const { subject, text } = readMessage(Buffer.concat(chunks).toString('utf8'));
         const from = session.envelope.mailFrom ? session.envelope.mailFrom.address : '';
-        keep({ from, to: session.envelope.rcptTo.map((r) => r.address), subject, text, date: new Date().toISOString() });
+        keep({
+          from,
+          to: session.envelope.rcptTo.map((r) => r.address),
+          subject,
+          text,
+          date: new Date().toISOString(),
+        });
         callback();
       });
     },

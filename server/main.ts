@@ -34,7 +34,11 @@ export interface Running {
 export async function startServer(options: ServeOptions): Promise<Running> {
   const { env, log } = options;
   const production = env.NODE_ENV === 'production';
-  const database = await openDatabase(env, join(resolve(options.root, env.FOURFOLD_DATA_DIR ?? '.data'), 'mariadb'), log);
+  const database = await openDatabase(
+    env,
+    join(resolve(options.root, env.FOURFOLD_DATA_DIR ?? '.data'), 'mariadb'),
+    log,
+  );
   const stack: (() => Promise<void>)[] = [database.stop];
   const close = async () => {
     while (stack.length) await stack.pop()!().catch((error: unknown) => log(`while stopping: ${String(error)}`));
@@ -45,15 +49,17 @@ export async function startServer(options: ServeOptions): Promise<Running> {
     const applied = await migrate(db.sequelize);
     if (applied.length) log(`applied migrations: ${applied.join(', ')}`);
     const demoPassword = env.FOURFOLD_DEMO_PASSWORD || DEFAULT_DEMO_PASSWORD;
-    const seeded = options.demo && !production && (await seedDemo(db, { password: demoPassword, examplesDir: options.examplesDir }));
+    const seeded =
+      options.demo && !production && (await seedDemo(db, { password: demoPassword, examplesDir: options.examplesDir }));
     const mailer = await createMailer({
       smtpUrl: env.SMTP_URL || undefined,
       from: env.MAIL_FROM || 'Fourfold <no-reply@fourfold.invalid>',
     });
     stack.push(() => mailer.close());
     const sockets = new Set<Socket>();
-    let server: Server | undefined;
-    const publicUrl = () => (env.PUBLIC_URL || `http://127.0.0.1:${(server!.address() as AddressInfo).port}`).replace(/\/+$/, '');
+    // Read at request time, once the server below is listening.
+    const publicUrl = () =>
+      (env.PUBLIC_URL || `http://127.0.0.1:${(server.address() as AddressInfo).port}`).replace(/\/+$/, '');
     const app = createApp({
       db,
       mailer,
@@ -64,7 +70,7 @@ export async function startServer(options: ServeOptions): Promise<Running> {
       webDir: join(options.root, 'dist', 'web'),
       log: (error) => log(error instanceof Error ? (error.stack ?? error.message) : String(error)),
     });
-    server = app.listen(options.port, '127.0.0.1');
+    const server: Server = app.listen(options.port, '127.0.0.1');
     await once(server, 'listening');
     server.on('connection', (socket) => {
       sockets.add(socket);

@@ -36,7 +36,11 @@ export async function issuePasswordLink(
 }
 
 /** Uses up a link and sets the password; null when the link is unknown, used or expired. */
-export async function redeemPasswordLink(models: Models, token: string, password: string): Promise<UserInstance | null> {
+export async function redeemPasswordLink(
+  models: Models,
+  token: string,
+  password: string,
+): Promise<UserInstance | null> {
   if (!looksLikeToken(token)) return null;
   const row = await models.PasswordToken.findOne({
     where: { tokenHash: hashToken(token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },

@@ -35,7 +35,10 @@ const chartQuery = z.object({
 const stepsQuery = z.object({ format: z.enum(['json', 'text', 'md', 'html']).default('json') });
 const kitQuery = z.object({ format: z.enum(['md', 'html']).default('md') });
 
-const json = (value: unknown): Rendered => ({ type: 'application/json; charset=utf-8', body: `${JSON.stringify(value, null, 2)}\n` });
+const json = (value: unknown): Rendered => ({
+  type: 'application/json; charset=utf-8',
+  body: `${JSON.stringify(value, null, 2)}\n`,
+});
 
 /** The tally of an error-free model, or null: like the CLI, no material list for a pattern that does not build. */
 export function tallyOf(model: Model): Tally | null {
@@ -50,7 +53,12 @@ function needsClean(model: Model): void {
   }
 }
 
-export type Render = (kind: ViewKind, versionId: number, loadModel: () => Promise<Model | null>, query: Record<string, unknown>) => Promise<Rendered>;
+export type Render = (
+  kind: ViewKind,
+  versionId: number,
+  loadModel: () => Promise<Model | null>,
+  query: Record<string, unknown>,
+) => Promise<Rendered>;
 
 /**
  * renderView behind a small LRU of charts by version and options, for one
@@ -77,8 +85,13 @@ export function cachedRenderer(max = 64): Render {
   };
 }
 
-export async function renderView(kind: ViewKind, model: Model | null, query: Record<string, unknown>): Promise<Rendered> {
-  if (!model) throw new HttpError(422, 'no-model', 'This version could not be built, so there is nothing to draw or count.');
+export async function renderView(
+  kind: ViewKind,
+  model: Model | null,
+  query: Record<string, unknown>,
+): Promise<Rendered> {
+  if (!model)
+    throw new HttpError(422, 'no-model', 'This version could not be built, so there is nothing to draw or count.');
   switch (kind) {
     case 'model':
       return json(model);

@@ -6,9 +6,16 @@ import type { VersionInstance } from './models/version.js';
 import { countSeverity } from './engine.js';
 
 const iso = (d: Date | null | undefined): string | null => (d ? new Date(d).toISOString() : null);
-const person = (u: { id: number; name: string } | null | undefined) => (u ? { id: u.id, name: u.name } : { id: 0, name: 'Former member' });
+const person = (u: { id: number; name: string } | null | undefined) =>
+  u ? { id: u.id, name: u.name } : { id: 0, name: 'Former member' };
 
-export const toUser = (u: UserInstance) => ({ id: u.id, name: u.name, email: u.email, role: u.role, createdAt: iso(u.createdAt) });
+export const toUser = (u: UserInstance) => ({
+  id: u.id,
+  name: u.name,
+  email: u.email,
+  role: u.role,
+  createdAt: iso(u.createdAt),
+});
 
 export interface Sharing {
   links: number;

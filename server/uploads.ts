@@ -36,7 +36,9 @@ export function decodeText(name: string, bytes: Buffer): string {
     if (bytes.includes(0)) throw new Error('NUL byte');
     text = utf8.decode(bytes);
   } catch {
-    throw new HttpError(415, 'not-text', `${name} is not a text file; only UTF-8 pattern text is accepted.`, { file: name });
+    throw new HttpError(415, 'not-text', `${name} is not a text file; only UTF-8 pattern text is accepted.`, {
+      file: name,
+    });
   }
   return text.startsWith('\uFEFF') ? text.slice(1) : text;
 }
@@ -50,10 +52,15 @@ export function sourcesOf(req: Request, fallbackName = 'pasted.ffp'): Source[] {
     return files.map((f) => ({ name: f.originalname, source: decodeText(f.originalname, f.buffer) }));
   }
   if (!req.is('application/json')) {
-    throw new HttpError(415, 'unsupported-media-type', 'Send multipart/form-data with files, or JSON { "source": "..." }.');
+    throw new HttpError(
+      415,
+      'unsupported-media-type',
+      'Send multipart/form-data with files, or JSON { "source": "..." }.',
+    );
   }
   const body = check(pasted, req.body);
-  if (Buffer.byteLength(body.source, 'utf8') > MAX_FILE_BYTES) throw new HttpError(413, 'too-large', 'A pattern may be at most 1 MiB.');
+  if (Buffer.byteLength(body.source, 'utf8') > MAX_FILE_BYTES)
+    throw new HttpError(413, 'too-large', 'A pattern may be at most 1 MiB.');
   if (body.source.includes('\0')) throw new HttpError(415, 'not-text', 'The text contains NUL characters.');
   return [{ name: body.name ?? fallbackName, source: body.source }];
 }

@@ -9,7 +9,9 @@ import type { UserInstance } from './models/user.js';
 import { analyse, contentHash, countSeverity, type Analysis } from './engine.js';
 import type { Source } from './uploads.js';
 
-const patternFields = (a: Analysis): Omit<PatternAttributes, 'id' | 'ownerId' | 'currentVersion' | 'createdAt' | 'updatedAt'> => ({
+const patternFields = (
+  a: Analysis,
+): Omit<PatternAttributes, 'id' | 'ownerId' | 'currentVersion' | 'createdAt' | 'updatedAt'> => ({
   title: a.title.slice(0, 300),
   layout: a.layout,
   rows: a.rows,
@@ -38,8 +40,14 @@ export async function createPatterns(db: Db, owner: UserInstance, sources: Sourc
   return db.sequelize.transaction(async (transaction) => {
     const created: Created[] = [];
     for (const [i, analysis] of analyses.entries()) {
-      const pattern = await Pattern.create({ ownerId: owner.id, currentVersion: 1, ...patternFields(analysis) }, { transaction });
-      await Version.create({ patternId: pattern.id, number: 1, authorId: owner.id, ...versionFields(analysis, sources[i]!.source) }, { transaction });
+      const pattern = await Pattern.create(
+        { ownerId: owner.id, currentVersion: 1, ...patternFields(analysis) },
+        { transaction },
+      );
+      await Version.create(
+        { patternId: pattern.id, number: 1, authorId: owner.id, ...versionFields(analysis, sources[i]!.source) },
+        { transaction },
+      );
       created.push({ pattern, analysis });
     }
     return created;
@@ -54,14 +62,20 @@ export async function addVersion(
   source: string,
 ): Promise<{ created: boolean; version: number }> {
   const { Pattern, Version } = db.models;
-  const current = await Version.findOne({ where: { patternId: pattern.id, number: pattern.currentVersion }, attributes: ['contentHash'] });
+  const current = await Version.findOne({
+    where: { patternId: pattern.id, number: pattern.currentVersion },
+    attributes: ['contentHash'],
+  });
   if (current?.contentHash === contentHash(source)) return { created: false, version: pattern.currentVersion };
   const analysis = await analyse(source);
   return db.sequelize.transaction(async (transaction) => {
     // Lock the pattern row so two saves at once get consecutive numbers.
     const locked = await Pattern.findByPk(pattern.id, { transaction, lock: transaction.LOCK.UPDATE });
     const number = (locked?.currentVersion ?? pattern.currentVersion) + 1;
-    await Version.create({ patternId: pattern.id, number, authorId: author.id, ...versionFields(analysis, source) }, { transaction });
+    await Version.create(
+      { patternId: pattern.id, number, authorId: author.id, ...versionFields(analysis, source) },
+      { transaction },
+    );
     await pattern.update({ currentVersion: number, ...patternFields(analysis) }, { transaction });
     return { created: true, version: number };
   });

@@ -52,7 +52,10 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
     const me = await call<Me>(server, token, 'GET', '/api/auth/me');
     const file = await save(io.env, { server, token });
     if (cmd.options.format === 'json') io.stdout.write(`${JSON.stringify({ server, user: me.user, config: file })}\n`);
-    else io.stdout.write(`Signed in to ${server} as ${me.user.name} <${me.user.email}> (${me.user.role}); token kept in ${file}\n`);
+    else
+      io.stdout.write(
+        `Signed in to ${server} as ${me.user.name} <${me.user.email}> (${me.user.role}); token kept in ${file}\n`,
+      );
     return EXIT_OK;
   } catch (error) {
     if (!(error instanceof ApiError)) throw error;

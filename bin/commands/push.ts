@@ -33,11 +33,22 @@ async function pushOne(viewer: Saved, me: number, source: string): Promise<{ pat
   const { parse } = await import('../../parser/index.js');
   const title = parse(source).value.header.title;
   const found = title
-    ? await call<{ items: Summary[] }>(viewer.server, viewer.token, 'GET', `/api/patterns?q=${encodeURIComponent(title)}&sort=updated&pageSize=100`)
+    ? await call<{ items: Summary[] }>(
+        viewer.server,
+        viewer.token,
+        'GET',
+        `/api/patterns?q=${encodeURIComponent(title)}&sort=updated&pageSize=100`,
+      )
     : { items: [] };
   const mine = found.items.find((p) => p.title === title && p.owner.id === me);
   if (mine) {
-    const { created, pattern } = await call<{ created: boolean; pattern: Detail }>(viewer.server, viewer.token, 'PUT', `/api/patterns/${mine.id}`, { source });
+    const { created, pattern } = await call<{ created: boolean; pattern: Detail }>(
+      viewer.server,
+      viewer.token,
+      'PUT',
+      `/api/patterns/${mine.id}`,
+      { source },
+    );
     return { pattern, note: created ? `version ${pattern.version}` : `unchanged, version ${pattern.version}` };
   }
   const { items } = await call<{ items: Detail[] }>(viewer.server, viewer.token, 'POST', '/api/patterns', { source });
@@ -48,7 +59,14 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
   const viewer = await remote(cmd, io);
   if (!viewer) return EXIT_FAILURE;
   let code = EXIT_OK;
-  const results: { file: string; id?: number; url?: string; version?: number; diagnostics?: Diagnostic[]; error?: string }[] = [];
+  const results: {
+    file: string;
+    id?: number;
+    url?: string;
+    version?: number;
+    diagnostics?: Diagnostic[];
+    error?: string;
+  }[] = [];
   let me: number;
   try {
     me = (await call<{ user: { id: number } }>(viewer.server, viewer.token, 'GET', '/api/auth/me')).user.id;
@@ -69,7 +87,13 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
     try {
       const { pattern, note } = await pushOne(viewer, me, input.text);
       const url = `${viewer.server}/patterns/${pattern.id}`;
-      results.push({ file: input.file, id: pattern.id, url, version: pattern.version, diagnostics: pattern.diagnostics });
+      results.push({
+        file: input.file,
+        id: pattern.id,
+        url,
+        version: pattern.version,
+        diagnostics: pattern.diagnostics,
+      });
       if (cmd.options.format !== 'json') {
         io.stdout.write(`${input.file}: ${url} (${note})\n`);
         printDiagnostics(input.file, input.text, pattern.diagnostics, io);
@@ -82,6 +106,7 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
       code = EXIT_FAILURE;
     }
   }
-  if (cmd.options.format === 'json') io.stdout.write(`${JSON.stringify({ schema: 'fourfold.push/1', files: results }, null, 2)}\n`);
+  if (cmd.options.format === 'json')
+    io.stdout.write(`${JSON.stringify({ schema: 'fourfold.push/1', files: results }, null, 2)}\n`);
   return code;
 }

@@ -14,7 +14,8 @@ function projectRoot(): string {
   let dir = dirname(fileURLToPath(import.meta.url));
   for (;;) {
     const manifest = join(dir, 'package.json');
-    if (existsSync(manifest) && (JSON.parse(readFileSync(manifest, 'utf8')) as { name?: string }).name === 'fourfold') return dir;
+    if (existsSync(manifest) && (JSON.parse(readFileSync(manifest, 'utf8')) as { name?: string }).name === 'fourfold')
+      return dir;
     const up = dirname(dir);
     if (up === dir) throw new Error('cannot find the fourfold package folder');
     dir = up;
@@ -49,7 +50,14 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
   const { startServer } = await import('../../server/main.js');
   let running;
   try {
-    running = await startServer({ port, demo: cmd.options.demo === true, examplesDir: examples, root, env: io.env, log });
+    running = await startServer({
+      port,
+      demo: cmd.options.demo === true,
+      examplesDir: examples,
+      root,
+      env: io.env,
+      log,
+    });
   } catch (error) {
     io.stderr.write(`fourfold: serve: ${(error as Error).message}\n`);
     return EXIT_FAILURE;
@@ -57,10 +65,14 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
   if (examples) {
     const { convertPaths } = await import('../convert/index.js');
     const summary = await convertPaths([examples], { out: join(root, 'out'), cwd: io.cwd });
-    log(`examples: ${summary.converted} converted, ${summary.skipped} up to date, ${summary.failed} with errors, into ${join(root, 'out')}`);
+    log(
+      `examples: ${summary.converted} converted, ${summary.skipped} up to date, ${summary.failed} with errors, into ${join(root, 'out')}`,
+    );
   }
   const { DEMO_ACCOUNTS } = await import('../../server/seed.js');
-  const accounts = running.demoPassword ? DEMO_ACCOUNTS.map((a) => ({ email: a.email, role: a.role, password: running.demoPassword })) : [];
+  const accounts = running.demoPassword
+    ? DEMO_ACCOUNTS.map((a) => ({ email: a.email, role: a.role, password: running.demoPassword }))
+    : [];
   if (cmd.options.format === 'json') {
     io.stdout.write(`${JSON.stringify({ url: running.url, accounts })}\n`);
   } else {

@@ -55,7 +55,9 @@ export async function findMariadbd(log: (line: string) => void = () => {}): Prom
   if (found) return found;
   const command = `apt-get install -y ${APT_PACKAGES.join(' ')}`;
   if (process.getuid?.() !== 0) {
-    throw new Error(`MariaDB is not installed. Install it with:\n  sudo ${command}\nor set DATABASE_URL to an existing server.`);
+    throw new Error(
+      `MariaDB is not installed. Install it with:\n  sudo ${command}\nor set DATABASE_URL to an existing server.`,
+    );
   }
   log(`installing MariaDB: ${command}`);
   await run('apt-get', ['install', '-y', ...APT_PACKAGES], {
@@ -73,7 +75,9 @@ export async function freePort(): Promise<number> {
     probe.once('error', reject);
     probe.listen(0, '127.0.0.1', () => {
       const address = probe.address();
-      probe.close(() => (typeof address === 'object' && address ? resolvePort(address.port) : reject(new Error('no port'))));
+      probe.close(() =>
+        typeof address === 'object' && address ? resolvePort(address.port) : reject(new Error('no port')),
+      );
     });
   });
 }
@@ -160,7 +164,9 @@ export async function launchMariadb(options: LaunchOptions): Promise<Database> {
     await waitForSocket(socket, child, () => stderr);
     const conn = await mariadb.createConnection({ socketPath: socket, user: 'root' });
     try {
-      await conn.query(`CREATE DATABASE IF NOT EXISTS ${quoteIdent(database)} CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`);
+      await conn.query(
+        `CREATE DATABASE IF NOT EXISTS ${quoteIdent(database)} CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci`,
+      );
       for (const host of ['127.0.0.1', 'localhost']) {
         await conn.query(`CREATE USER IF NOT EXISTS ?@? IDENTIFIED BY ?`, [user, host, password]);
         await conn.query(`ALTER USER ?@? IDENTIFIED BY ?`, [user, host, password]);
@@ -179,7 +185,11 @@ export async function launchMariadb(options: LaunchOptions): Promise<Database> {
 }
 
 /** DATABASE_URL when set (nothing started), otherwise our own server under `dataDir`. */
-export async function openDatabase(env: NodeJS.ProcessEnv, dataDir: string, log?: (line: string) => void): Promise<Database> {
+export async function openDatabase(
+  env: NodeJS.ProcessEnv,
+  dataDir: string,
+  log?: (line: string) => void,
+): Promise<Database> {
   if (env.DATABASE_URL) return { url: env.DATABASE_URL, stop: async () => {} };
   return launchMariadb({ dataDir, log });
 }

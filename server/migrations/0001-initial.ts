@@ -112,7 +112,17 @@ export async function up({ context: qi }: { context: QueryInterface }): Promise<
 }
 
 export async function down({ context: qi }: { context: QueryInterface }): Promise<void> {
-  for (const table of ['places', 'feedback', 'invitations', 'share_links', 'versions', 'patterns', 'password_tokens', 'access_tokens', 'users']) {
+  for (const table of [
+    'places',
+    'feedback',
+    'invitations',
+    'share_links',
+    'versions',
+    'patterns',
+    'password_tokens',
+    'access_tokens',
+    'users',
+  ]) {
     await qi.dropTable(table);
   }
 }

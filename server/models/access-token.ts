@@ -17,7 +17,8 @@ export interface AccessTokenAttributes {
   updatedAt: Date;
 }
 export interface AccessTokenInstance
-  extends Model<
+  extends
+    Model<
       AccessTokenAttributes,
       Optional<AccessTokenAttributes, 'id' | 'lastUsedAt' | 'expiresAt' | 'revokedAt' | 'createdAt' | 'updatedAt'>
     >,

@@ -15,7 +15,8 @@ export interface FeedbackAttributes {
   updatedAt: Date;
 }
 export interface FeedbackInstance
-  extends Model<
+  extends
+    Model<
       FeedbackAttributes,
       Optional<FeedbackAttributes, 'id' | 'unit' | 'status' | 'resolvedAt' | 'createdAt' | 'updatedAt'>
     >,

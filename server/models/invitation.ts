@@ -9,8 +9,7 @@ export interface InvitationAttributes {
   createdAt: Date;
 }
 export interface InvitationInstance
-  extends Model<InvitationAttributes, Optional<InvitationAttributes, 'id' | 'createdAt'>>,
-    InvitationAttributes {}
+  extends Model<InvitationAttributes, Optional<InvitationAttributes, 'id' | 'createdAt'>>, InvitationAttributes {}
 
 export const defineInvitation = (sequelize: Sequelize) =>
   sequelize.define<InvitationInstance>(

@@ -11,7 +11,8 @@ export interface PasswordTokenAttributes {
   createdAt: Date;
 }
 export interface PasswordTokenInstance
-  extends Model<PasswordTokenAttributes, Optional<PasswordTokenAttributes, 'id' | 'usedAt' | 'createdAt'>>,
+  extends
+    Model<PasswordTokenAttributes, Optional<PasswordTokenAttributes, 'id' | 'usedAt' | 'createdAt'>>,
     PasswordTokenAttributes {}
 
 export const definePasswordToken = (sequelize: Sequelize) =>

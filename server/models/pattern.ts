@@ -23,8 +23,7 @@ export interface PatternAttributes {
   updatedAt: Date;
 }
 export interface PatternInstance
-  extends Model<PatternAttributes, Optional<PatternAttributes, 'id' | 'createdAt' | 'updatedAt'>>,
-    PatternAttributes {}
+  extends Model<PatternAttributes, Optional<PatternAttributes, 'id' | 'createdAt' | 'updatedAt'>>, PatternAttributes {}
 
 export const definePattern = (sequelize: Sequelize) =>
   sequelize.define<PatternInstance>(

@@ -9,7 +9,8 @@ export interface PlaceAttributes {
   unit: number;
   updatedAt: Date;
 }
-export interface PlaceInstance extends Model<PlaceAttributes, Optional<PlaceAttributes, 'id' | 'updatedAt'>>, PlaceAttributes {}
+export interface PlaceInstance
+  extends Model<PlaceAttributes, Optional<PlaceAttributes, 'id' | 'updatedAt'>>, PlaceAttributes {}
 
 export const definePlace = (sequelize: Sequelize) =>
   sequelize.define<PlaceInstance>(

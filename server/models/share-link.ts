@@ -10,7 +10,8 @@ export interface ShareLinkAttributes {
   createdAt: Date;
 }
 export interface ShareLinkInstance
-  extends Model<ShareLinkAttributes, Optional<ShareLinkAttributes, 'id' | 'expiresAt' | 'revokedAt' | 'createdAt'>>,
+  extends
+    Model<ShareLinkAttributes, Optional<ShareLinkAttributes, 'id' | 'expiresAt' | 'revokedAt' | 'createdAt'>>,
     ShareLinkAttributes {}
 
 export const defineShareLink = (sequelize: Sequelize) =>

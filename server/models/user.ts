@@ -14,7 +14,8 @@ export interface UserAttributes {
   updatedAt: Date;
 }
 export interface UserInstance
-  extends Model<UserAttributes, Optional<UserAttributes, 'id' | 'passwordHash' | 'createdAt' | 'updatedAt'>>,
+  extends
+    Model<UserAttributes, Optional<UserAttributes, 'id' | 'passwordHash' | 'createdAt' | 'updatedAt'>>,
     UserAttributes {}
 
 export const defineUser = (sequelize: Sequelize) =>

@@ -15,8 +15,7 @@ export interface VersionAttributes {
   createdAt: Date;
 }
 export interface VersionInstance
-  extends Model<VersionAttributes, Optional<VersionAttributes, 'id' | 'model' | 'createdAt'>>,
-    VersionAttributes {}
+  extends Model<VersionAttributes, Optional<VersionAttributes, 'id' | 'model' | 'createdAt'>>, VersionAttributes {}
 
 export const defineVersion = (sequelize: Sequelize) =>
   sequelize.define<VersionInstance>(

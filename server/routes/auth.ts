@@ -19,8 +19,12 @@ export function authRoutes(deps: AppDeps): Router {
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     // Per address, so guessing one account's password is slow from anywhere.
-    keyGenerator: (req) => `login:${String((req.body as { email?: unknown } | undefined)?.email ?? '').trim().toLowerCase()}`,
-    handler: (_req, _res, next) => next(new HttpError(429, 'too-many-requests', 'Too many sign-in attempts; wait a minute and try again.')),
+    keyGenerator: (req) =>
+      `login:${String((req.body as { email?: unknown } | undefined)?.email ?? '')
+        .trim()
+        .toLowerCase()}`,
+    handler: (_req, _res, next) =>
+      next(new HttpError(429, 'too-many-requests', 'Too many sign-in attempts; wait a minute and try again.')),
   });
 
   router.post('/login', signInLimit, async (req, res) => {
@@ -50,7 +54,8 @@ export function authRoutes(deps: AppDeps): Router {
   router.post('/reset', async (req, res) => {
     const body = check(z.object({ token: z.string().max(100), password }), req.body);
     const user = await redeemPasswordLink(models, body.token, body.password);
-    if (!user) throw new HttpError(400, 'invalid-token', 'This link has expired or was already used; ask for a new one.');
+    if (!user)
+      throw new HttpError(400, 'invalid-token', 'This link has expired or was already used; ask for a new one.');
     const { token } = await issueSession(models, user);
     res.json({ token, user: toUser(user) });
   });
@@ -69,7 +74,9 @@ export function authRoutes(deps: AppDeps): Router {
     const body = check(z.object({ current: z.string().max(200), password }), req.body);
     const { user } = auth(res);
     if (!(await verifyPassword(user, body.current))) {
-      throw new HttpError(400, 'invalid-input', 'The current password is wrong.', [{ path: 'current', message: 'wrong password' }]);
+      throw new HttpError(400, 'invalid-input', 'The current password is wrong.', [
+        { path: 'current', message: 'wrong password' },
+      ]);
     }
     await user.update({ passwordHash: await hashPassword(body.password) });
     res.status(204).end();

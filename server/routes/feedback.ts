@@ -10,7 +10,12 @@ import { toFeedback } from '../serialize.js';
 import { check, idParam, idParams, versionQuery } from '../validate.js';
 
 const position = { row: z.number().int().min(1).max(1_000_000), unit: z.number().int().min(1).max(1_000_000) };
-const feedbackBody = z.object({ ...position, unit: position.unit.optional(), text: z.string().trim().min(1).max(4000), version: idParam.optional() });
+const feedbackBody = z.object({
+  ...position,
+  unit: position.unit.optional(),
+  text: z.string().trim().min(1).max(4000),
+  version: idParam.optional(),
+});
 
 /** Units per row of a stored model, or null when the version has no model (then every row counts as present). */
 function rowSizes(modelJson: string | null): Map<number, number> | null {
@@ -33,7 +38,14 @@ export function feedbackRoutes(deps: AppDeps): Router {
     const { pattern } = await visiblePattern(models, auth(res), id);
     const shown = await findVersion(models, pattern, version);
     const sizes = rowSizes(shown.model);
-    const notes = await models.Feedback.findAll({ where: { patternId: id }, include, order: [['createdAt', 'ASC'], ['id', 'ASC']] });
+    const notes = await models.Feedback.findAll({
+      where: { patternId: id },
+      include,
+      order: [
+        ['createdAt', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    });
     // A note shows on its own version and later ones while its row (and unit) still exist.
     const items = notes.filter((n) => n.version <= shown.number && exists(sizes, n.row, n.unit)).map(toFeedback);
     res.json({ items });
@@ -46,7 +58,11 @@ export function feedbackRoutes(deps: AppDeps): Router {
     const { pattern } = await visiblePattern(models, ctx, id);
     const shown = await findVersion(models, pattern, body.version);
     if (!exists(rowSizes(shown.model), body.row, body.unit ?? null)) {
-      throw new HttpError(400, 'invalid-input', `Version ${shown.number} has no row ${body.row}${body.unit ? `, unit ${body.unit}` : ''}.`);
+      throw new HttpError(
+        400,
+        'invalid-input',
+        `Version ${shown.number} has no row ${body.row}${body.unit ? `, unit ${body.unit}` : ''}.`,
+      );
     }
     const note = await models.Feedback.create({
       patternId: id,

@@ -27,15 +27,24 @@ export function sharingRoutes(deps: AppDeps): Router {
     const pattern = await ownPattern(models, ctx, id);
     const token = newToken();
     const expiresAt = body.expiresInDays ? new Date(Date.now() + body.expiresInDays * DAY_MS) : null;
-    const share = await models.ShareLink.create({ patternId: pattern.id, createdById: ctx.user.id, tokenHash: hashToken(token), expiresAt });
+    const share = await models.ShareLink.create({
+      patternId: pattern.id,
+      createdById: ctx.user.id,
+      tokenHash: hashToken(token),
+      expiresAt,
+    });
     res.status(201).json({ id: share.id, token, url: `${deps.publicUrl}/s/${token}`, expiresAt: iso(expiresAt) });
   });
 
   router.delete('/:id/shares/:shareId', async (req, res) => {
     const { id, shareId } = check(z.object({ id: idParam, shareId: idParam }), req.params);
     const pattern = await ownPattern(models, auth(res), id);
-    const [changed] = await models.ShareLink.update({ revokedAt: new Date() }, { where: { id: shareId, patternId: pattern.id, revokedAt: null } });
-    if (changed === 0 && !(await models.ShareLink.findOne({ where: { id: shareId, patternId: pattern.id } }))) throw notFound('No such share link.');
+    const [changed] = await models.ShareLink.update(
+      { revokedAt: new Date() },
+      { where: { id: shareId, patternId: pattern.id, revokedAt: null } },
+    );
+    if (changed === 0 && !(await models.ShareLink.findOne({ where: { id: shareId, patternId: pattern.id } })))
+      throw notFound('No such share link.');
     res.status(204).end();
   });
 
@@ -43,7 +52,13 @@ export function sharingRoutes(deps: AppDeps): Router {
     const { id } = check(idParams, req.params);
     const pattern = await ownPattern(models, auth(res), id);
     const [shares, invitations] = await Promise.all([
-      models.ShareLink.findAll({ where: { patternId: pattern.id }, order: [['createdAt', 'DESC'], ['id', 'DESC']] }),
+      models.ShareLink.findAll({
+        where: { patternId: pattern.id },
+        order: [
+          ['createdAt', 'DESC'],
+          ['id', 'DESC'],
+        ],
+      }),
       models.Invitation.findAll({
         where: { patternId: pattern.id },
         include: [{ model: models.User, as: 'tester' }],
@@ -73,9 +88,17 @@ export function sharingRoutes(deps: AppDeps): Router {
     const pattern = await ownPattern(models, ctx, id);
     let tester = await models.User.findOne({ where: { email: body.email } });
     const created = !tester;
-    tester ??= await models.User.create({ email: body.email, name: body.name ?? body.email.split('@')[0]!, role: 'tester' });
+    tester ??= await models.User.create({
+      email: body.email,
+      name: body.name ?? body.email.split('@')[0]!,
+      role: 'tester',
+    });
     if (tester.role !== 'tester') {
-      throw new HttpError(409, 'conflict', 'This address belongs to a designer or admin account; only testers can be invited.');
+      throw new HttpError(
+        409,
+        'conflict',
+        'This address belongs to a designer or admin account; only testers can be invited.',
+      );
     }
     await models.Invitation.findOrCreate({
       where: { patternId: pattern.id, testerId: tester.id },

@@ -29,13 +29,22 @@ export function tokenRoutes(deps: AppDeps): Router {
         revokedAt: null,
         [Op.or]: [{ expiresAt: null }, { expiresAt: { [Op.gt]: new Date() } }],
       },
-      order: [['createdAt', 'DESC'], ['id', 'DESC']],
+      order: [
+        ['createdAt', 'DESC'],
+        ['id', 'DESC'],
+      ],
     });
     res.json({ items: tokens.map(toToken) });
   });
 
   router.post('/', async (req, res) => {
-    const body = check(z.object({ name: z.string().trim().min(1).max(200), expiresInDays: z.number().int().min(1).max(3650).optional() }), req.body);
+    const body = check(
+      z.object({
+        name: z.string().trim().min(1).max(200),
+        expiresInDays: z.number().int().min(1).max(3650).optional(),
+      }),
+      req.body,
+    );
     const expiresAt = body.expiresInDays ? new Date(Date.now() + body.expiresInDays * 86_400_000) : null;
     const { token, row } = await issueToken(models, auth(res).user, 'personal', body.name, expiresAt);
     res.status(201).json({ token, item: toToken(row) });

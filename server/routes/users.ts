@@ -32,7 +32,10 @@ export function userRoutes(deps: AppDeps): Router {
     const like = query.q ? `%${query.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%` : null;
     const { rows, count } = await models.User.findAndCountAll({
       where: like ? { [Op.or]: [{ name: { [Op.like]: like } }, { email: { [Op.like]: like } }] } : {},
-      order: [['name', 'ASC'], ['id', 'ASC']],
+      order: [
+        ['name', 'ASC'],
+        ['id', 'ASC'],
+      ],
       limit: query.pageSize,
       offset: (query.page - 1) * query.pageSize,
     });
@@ -42,7 +45,12 @@ export function userRoutes(deps: AppDeps): Router {
   router.post('/', async (req, res) => {
     const body = check(z.object({ name, email, role, password }), req.body);
     const user = await uniqueEmail(async () =>
-      models.User.create({ name: body.name, email: body.email, role: body.role, passwordHash: await hashPassword(body.password) }),
+      models.User.create({
+        name: body.name,
+        email: body.email,
+        role: body.role,
+        passwordHash: await hashPassword(body.password),
+      }),
     );
     res.status(201).json(toUser(user));
   });

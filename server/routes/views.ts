@@ -23,7 +23,15 @@ const sharedParams = z.object({ token: z.string().max(100) });
  * Sends one view. A pattern the caller may not see and a version that does
  * not exist are both 404; the model is read only when the view is not cached.
  */
-async function send(res: Response, deps: AppDeps, render: Render, ctx: AuthContext | null, patternId: number, kind: ViewKind, query: Record<string, unknown>) {
+async function send(
+  res: Response,
+  deps: AppDeps,
+  render: Render,
+  ctx: AuthContext | null,
+  patternId: number,
+  kind: ViewKind,
+  query: Record<string, unknown>,
+) {
   const { version } = check(versionQuery, { version: query.version });
   const versionId = await viewableVersionId(deps.db, ctx, patternId, version);
   if (versionId === null) throw notFound(version ? 'No such pattern or version.' : 'No such pattern.');
@@ -69,7 +77,15 @@ export function sharedRoutes(deps: AppDeps, render: Render): Router {
   for (const kind of SHARED_VIEWS) {
     router.get(`/:token/${kind}`, async (req, res) => {
       const { token } = check(sharedParams, req.params);
-      await send(res, deps, render, null, await sharedPatternId(deps, token), kind, req.query as Record<string, unknown>);
+      await send(
+        res,
+        deps,
+        render,
+        null,
+        await sharedPatternId(deps, token),
+        kind,
+        req.query as Record<string, unknown>,
+      );
     });
   }
   return router;

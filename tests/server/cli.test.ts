@@ -64,7 +64,10 @@ describe('CLI against a running viewer', () => {
 
   it('pushes files, printing URLs and diagnostics, then makes versions only for changes', async () => {
     await writeFile(join(dir, 'band.ffp'), SAMPLE);
-    await writeFile(join(dir, 'broken.ffp'), SAMPLE.replace('Harbour Band', 'Broken Band').replace('row 2: BAB AB AB', 'row 2: BAB ABB AB'));
+    await writeFile(
+      join(dir, 'broken.ffp'),
+      SAMPLE.replace('Harbour Band', 'Broken Band').replace('row 2: BAB AB AB', 'row 2: BAB ABB AB'),
+    );
     const first = await cli(['push', 'band.ffp', 'broken.ffp']);
     expect(first.code).toBe(1);
     expect(first.out).toMatch(new RegExp(`^band\\.ffp: ${url}/patterns/\\d+ \\(new, version 1\\)$`, 'm'));
@@ -92,7 +95,10 @@ describe('CLI against a running viewer', () => {
   });
 
   it('accepts a token given with --token and rejects a bad one', async () => {
-    const made = await request(h.app).post('/api/auth/login').send({ email: 'tester@example.com', password: PASSWORD }).expect(200);
+    const made = await request(h.app)
+      .post('/api/auth/login')
+      .send({ email: 'tester@example.com', password: PASSWORD })
+      .expect(200);
     const ok = await cli(['login', '--server', url, '--token', made.body.token]);
     expect(ok.code).toBe(0);
     expect(ok.out).toContain('Tobiah Renwick');

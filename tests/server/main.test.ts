@@ -7,29 +7,59 @@ import { freshDatabaseUrl } from './harness.js';
 
 const root = resolve(import.meta.dirname, '../..');
 
-async function json(url: string, init?: RequestInit): Promise<{ status: number; body: any }> {
+/** The parts of the answers these tests read: a sign-in and a library page. */
+interface Answer {
+  token?: string;
+  total?: number;
+  items?: { owner: { name: string } }[];
+}
+
+async function json(url: string, init?: RequestInit): Promise<{ status: number; body: Answer }> {
   const res = await fetch(url, { ...init, headers: { 'Content-Type': 'application/json', ...(init?.headers ?? {}) } });
-  return { status: res.status, body: await res.json() };
+  return { status: res.status, body: (await res.json()) as Answer };
 }
 
 describe('startServer', () => {
   it('migrates, seeds the demo studio once with the examples, and stops cleanly', async () => {
-    const env = { DATABASE_URL: await freshDatabaseUrl(), NODE_ENV: 'development', FOURFOLD_DEMO_PASSWORD: 'demo-pass-123' };
+    const env = {
+      DATABASE_URL: await freshDatabaseUrl(),
+      NODE_ENV: 'development',
+      FOURFOLD_DEMO_PASSWORD: 'demo-pass-123',
+    };
     const lines: string[] = [];
-    const first = await startServer({ port: 0, demo: true, examplesDir: resolve(root, 'examples'), root, env, log: (l) => lines.push(l) });
+    const first = await startServer({
+      port: 0,
+      demo: true,
+      examplesDir: resolve(root, 'examples'),
+      root,
+      env,
+      log: (l) => lines.push(l),
+    });
     try {
       expect(first.seeded).toBe(true);
       expect(lines).toContain('applied migrations: 0001-initial');
-      const login = await json(`${first.url}/api/auth/login`, { method: 'POST', body: JSON.stringify({ email: 'designer@example.com', password: 'demo-pass-123' }) });
+      const login = await json(`${first.url}/api/auth/login`, {
+        method: 'POST',
+        body: JSON.stringify({ email: 'designer@example.com', password: 'demo-pass-123' }),
+      });
       expect(login.status).toBe(200);
-      const list = await json(`${first.url}/api/patterns`, { headers: { Authorization: `Bearer ${login.body.token}` } });
+      const list = await json(`${first.url}/api/patterns`, {
+        headers: { Authorization: `Bearer ${login.body.token}` },
+      });
       expect(list.body.total).toBeGreaterThan(0);
-      expect(list.body.items.every((p: { owner: { name: string } }) => p.owner.name === 'Ines Marlow')).toBe(true);
+      expect(list.body.items!.every((p) => p.owner.name === 'Ines Marlow')).toBe(true);
     } finally {
       await first.close();
     }
     await expect(fetch(`${first.url}/api/health`)).rejects.toThrow();
-    const again = await startServer({ port: 0, demo: true, examplesDir: resolve(root, 'examples'), root, env, log: () => {} });
+    const again = await startServer({
+      port: 0,
+      demo: true,
+      examplesDir: resolve(root, 'examples'),
+      root,
+      env,
+      log: () => {},
+    });
     try {
       expect(again.seeded).toBe(false);
     } finally {

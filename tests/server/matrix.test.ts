@@ -41,10 +41,20 @@ const ROWS: Row[] = [
   { method: 'get', path: () => '/api/auth/me', expect: anyone(200) },
   { method: 'post', path: () => '/api/check', body: () => ({ source: SAMPLE }), expect: anyone(200) },
   { method: 'get', path: () => '/api/patterns', expect: anyone(200) },
-  { method: 'post', path: () => '/api/patterns', body: () => ({ source: SAMPLE }), expect: { anonymous: 401, tester: 403, other: 201, owner: 201, admin: 403 } },
+  {
+    method: 'post',
+    path: () => '/api/patterns',
+    body: () => ({ source: SAMPLE }),
+    expect: { anonymous: 401, tester: 403, other: 201, owner: 201, admin: 403 },
+  },
   { method: 'get', path: (f) => `/api/patterns/${f.pattern}`, expect: viewer },
   { method: 'get', path: (f) => `/api/patterns/${f.pattern}?version=1`, expect: viewer },
-  { method: 'put', path: (f) => `/api/patterns/${f.pattern}`, body: () => ({ source: SAMPLE + '# changed\n' }), expect: ownerOnly(200) },
+  {
+    method: 'put',
+    path: (f) => `/api/patterns/${f.pattern}`,
+    body: () => ({ source: SAMPLE + '# changed\n' }),
+    expect: ownerOnly(200),
+  },
   { method: 'delete', path: (f) => `/api/patterns/${f.pattern}`, expect: ownerOnly(204) },
   { method: 'get', path: (f) => `/api/patterns/${f.pattern}/versions`, expect: viewer },
   { method: 'get', path: (f) => `/api/patterns/${f.pattern}/chart.svg`, expect: viewer },
@@ -53,28 +63,85 @@ const ROWS: Row[] = [
   { method: 'get', path: (f) => `/api/patterns/${f.pattern}/steps`, expect: viewer },
   { method: 'get', path: (f) => `/api/patterns/${f.pattern}/kit`, expect: viewer },
   { method: 'get', path: (f) => `/api/patterns/${f.pattern}/model`, expect: viewer },
-  { method: 'post', path: (f) => `/api/patterns/${f.pattern}/shares`, body: () => ({ expiresInDays: 7 }), expect: ownerOnly(201) },
+  {
+    method: 'post',
+    path: (f) => `/api/patterns/${f.pattern}/shares`,
+    body: () => ({ expiresInDays: 7 }),
+    expect: ownerOnly(201),
+  },
   { method: 'delete', path: (f) => `/api/patterns/${f.pattern}/shares/${f.share}`, expect: ownerOnly(204) },
   { method: 'get', path: (f) => `/api/patterns/${f.pattern}/access`, expect: ownerOnly(200) },
-  { method: 'post', path: (f) => `/api/patterns/${f.pattern}/invites`, body: () => ({ email: `new-tester-${++unique}@example.com` }), expect: ownerOnly(201) },
+  {
+    method: 'post',
+    path: (f) => `/api/patterns/${f.pattern}/invites`,
+    body: () => ({ email: `new-tester-${++unique}@example.com` }),
+    expect: ownerOnly(201),
+  },
   { method: 'delete', path: (f) => `/api/patterns/${f.pattern}/invites/${f.testerId}`, expect: ownerOnly(204) },
   { method: 'get', path: (f) => `/api/patterns/${f.pattern}/feedback`, expect: viewer },
-  { method: 'post', path: (f) => `/api/patterns/${f.pattern}/feedback`, body: () => ({ row: 1, text: 'Row 1 is fine.' }), expect: { anonymous: 401, tester: 201, other: 404, owner: 201, admin: 403 } },
-  { method: 'patch', path: (f) => `/api/patterns/${f.pattern}/feedback/${f.feedback}`, body: () => ({ status: 'resolved' }), expect: ownerOnly(200) },
+  {
+    method: 'post',
+    path: (f) => `/api/patterns/${f.pattern}/feedback`,
+    body: () => ({ row: 1, text: 'Row 1 is fine.' }),
+    expect: { anonymous: 401, tester: 201, other: 404, owner: 201, admin: 403 },
+  },
+  {
+    method: 'patch',
+    path: (f) => `/api/patterns/${f.pattern}/feedback/${f.feedback}`,
+    body: () => ({ status: 'resolved' }),
+    expect: ownerOnly(200),
+  },
   { method: 'get', path: (f) => `/api/patterns/${f.pattern}/place`, expect: viewer },
-  { method: 'put', path: (f) => `/api/patterns/${f.pattern}/place`, body: () => ({ row: 2, unit: 1 }), expect: { anonymous: 401, tester: 200, other: 404, owner: 200, admin: 403 } },
+  {
+    method: 'put',
+    path: (f) => `/api/patterns/${f.pattern}/place`,
+    body: () => ({ row: 2, unit: 1 }),
+    expect: { anonymous: 401, tester: 200, other: 404, owner: 200, admin: 403 },
+  },
   { method: 'get', path: () => '/api/tokens', expect: anyone(200) },
   { method: 'post', path: () => '/api/tokens', body: () => ({ name: 'laptop' }), expect: anyone(201) },
   { method: 'delete', path: (f) => `/api/tokens/${f.ownToken}`, expect: anyone(204) },
   { method: 'get', path: () => '/api/users', expect: adminOnly(200) },
-  { method: 'post', path: () => '/api/users', body: () => ({ name: 'Pell Armitage', email: `made-${++unique}@example.com`, role: 'designer', password: 'long-enough-1' }), expect: adminOnly(201) },
-  { method: 'patch', path: (f) => `/api/users/${f.scratchUser}`, body: () => ({ role: 'designer' }), expect: adminOnly(200), scratch: true },
+  {
+    method: 'post',
+    path: () => '/api/users',
+    body: () => ({
+      name: 'Pell Armitage',
+      email: `made-${++unique}@example.com`,
+      role: 'designer',
+      password: 'long-enough-1',
+    }),
+    expect: adminOnly(201),
+  },
+  {
+    method: 'patch',
+    path: (f) => `/api/users/${f.scratchUser}`,
+    body: () => ({ role: 'designer' }),
+    expect: adminOnly(200),
+    scratch: true,
+  },
   { method: 'delete', path: (f) => `/api/users/${f.scratchUser}`, expect: adminOnly(204), scratch: true },
   { method: 'get', path: () => '/api/dev/outbox', expect: adminOnly(200) },
-  { method: 'get', path: (f) => `/api/shared/${f.shareToken}`, expect: { anonymous: 200, tester: 200, other: 200, owner: 200, admin: 200 } },
-  { method: 'get', path: (f) => `/api/shared/${f.shareToken}/chart.svg`, expect: { anonymous: 200, tester: 200, other: 200, owner: 200, admin: 200 } },
-  { method: 'get', path: (f) => `/api/shared/${f.shareToken}/tally`, expect: { anonymous: 200, tester: 200, other: 200, owner: 200, admin: 200 } },
-  { method: 'get', path: (f) => `/api/shared/${f.shareToken}/steps`, expect: { anonymous: 200, tester: 200, other: 200, owner: 200, admin: 200 } },
+  {
+    method: 'get',
+    path: (f) => `/api/shared/${f.shareToken}`,
+    expect: { anonymous: 200, tester: 200, other: 200, owner: 200, admin: 200 },
+  },
+  {
+    method: 'get',
+    path: (f) => `/api/shared/${f.shareToken}/chart.svg`,
+    expect: { anonymous: 200, tester: 200, other: 200, owner: 200, admin: 200 },
+  },
+  {
+    method: 'get',
+    path: (f) => `/api/shared/${f.shareToken}/tally`,
+    expect: { anonymous: 200, tester: 200, other: 200, owner: 200, admin: 200 },
+  },
+  {
+    method: 'get',
+    path: (f) => `/api/shared/${f.shareToken}/steps`,
+    expect: { anonymous: 200, tester: 200, other: 200, owner: 200, admin: 200 },
+  },
 ];
 
 let h: Harness;
@@ -92,18 +159,30 @@ beforeAll(async () => {
 });
 afterAll(async () => h?.close());
 
-const as = (caller: Caller, req: request.Test) => (tokens[caller] ? req.set('Authorization', `Bearer ${tokens[caller]}`) : req);
+const as = (caller: Caller, req: request.Test) =>
+  tokens[caller] ? req.set('Authorization', `Bearer ${tokens[caller]}`) : req;
 
 async function fixture(caller: Caller, scratchUser = false): Promise<Fixture> {
   const owner = (req: request.Test) => as('owner', req);
   const made = await owner(request(h.app).post('/api/patterns')).send({ source: SAMPLE }).expect(201);
   const pattern = made.body.items[0].id as number;
-  await owner(request(h.app).post(`/api/patterns/${pattern}/invites`)).send({ email: 'tester@example.com' }).expect(201);
-  const share = await owner(request(h.app).post(`/api/patterns/${pattern}/shares`)).send({}).expect(201);
-  const note = await as('tester', request(h.app).post(`/api/patterns/${pattern}/feedback`)).send({ row: 1, text: 'Stuck here.' }).expect(201);
+  await owner(request(h.app).post(`/api/patterns/${pattern}/invites`))
+    .send({ email: 'tester@example.com' })
+    .expect(201);
+  const share = await owner(request(h.app).post(`/api/patterns/${pattern}/shares`))
+    .send({})
+    .expect(201);
+  const note = await as('tester', request(h.app).post(`/api/patterns/${pattern}/feedback`))
+    .send({ row: 1, text: 'Stuck here.' })
+    .expect(201);
   const scratch = scratchUser
     ? await as('admin', request(h.app).post('/api/users'))
-        .send({ name: 'Scratch Person', email: `scratch-${++unique}@example.com`, role: 'tester', password: 'long-enough-1' })
+        .send({
+          name: 'Scratch Person',
+          email: `scratch-${++unique}@example.com`,
+          role: 'tester',
+          password: 'long-enough-1',
+        })
         .expect(201)
     : { body: { id: 0 } };
   let ownToken = 0;
@@ -111,7 +190,15 @@ async function fixture(caller: Caller, scratchUser = false): Promise<Fixture> {
     const t = await as(caller, request(h.app).post('/api/tokens')).send({ name: 'to revoke' }).expect(201);
     ownToken = t.body.item.id as number;
   }
-  return { pattern, share: share.body.id, shareToken: share.body.token, feedback: note.body.id, testerId, scratchUser: scratch.body.id, ownToken };
+  return {
+    pattern,
+    share: share.body.id,
+    shareToken: share.body.token,
+    feedback: note.body.id,
+    testerId,
+    scratchUser: scratch.body.id,
+    ownToken,
+  };
 }
 
 describe('route-by-role matrix', () => {
@@ -125,7 +212,8 @@ describe('route-by-role matrix', () => {
         if (row.body) req = req.send(row.body(f));
         const res = await req;
         seen[caller] = res.status;
-        if (res.status >= 400) expect(res.body.error?.code, `${caller}: ${JSON.stringify(res.body)}`).toBeTypeOf('string');
+        if (res.status >= 400)
+          expect(res.body.error?.code, `${caller}: ${JSON.stringify(res.body)}`).toBeTypeOf('string');
       }
       expect(seen).toEqual(row.expect);
     });
@@ -146,7 +234,10 @@ describe('route-by-role matrix', () => {
     await request(h.app).get('/api/auth/me').set('Authorization', `Bearer ${token}`).expect(200);
     await as('owner', request(h.app).delete(`/api/tokens/${made.body.item.id}`)).expect(204);
     await request(h.app).get('/api/auth/me').set('Authorization', `Bearer ${token}`).expect(401);
-    await request(h.app).get('/api/auth/me').set('Authorization', `Bearer ${'x'.repeat(43)}`).expect(401);
+    await request(h.app)
+      .get('/api/auth/me')
+      .set('Authorization', `Bearer ${'x'.repeat(43)}`)
+      .expect(401);
   });
 
   it("someone else's personal token cannot be revoked (404)", async () => {

@@ -29,12 +29,19 @@ const linkIn = (text: string): URL => new URL(/https?:\/\/\S+\/reset\?\S+/.exec(
 describe('share links', () => {
   it('work without sign-in while valid, and stop when revoked', async () => {
     const id = await newPattern();
-    const made = await as(owner, request(h.app).post(`/api/patterns/${id}/shares`)).send({}).expect(201);
+    const made = await as(owner, request(h.app).post(`/api/patterns/${id}/shares`))
+      .send({})
+      .expect(201);
     expect(made.body.url).toBe(`${PUBLIC_URL}/s/${made.body.token}`);
     // 32 random bytes in base64url, without padding.
     expect(Buffer.from(made.body.token, 'base64url')).toHaveLength(32);
     const view = await request(h.app).get(`/api/shared/${made.body.token}`).expect(200);
-    expect(view.body).toMatchObject({ id, title: 'Harbour Band', source: SAMPLE, can: { edit: false, feedback: false } });
+    expect(view.body).toMatchObject({
+      id,
+      title: 'Harbour Band',
+      source: SAMPLE,
+      can: { edit: false, feedback: false },
+    });
     const svg = await request(h.app).get(`/api/shared/${made.body.token}/chart.svg`).expect(200);
     expect(svg.headers['content-type']).toMatch(/^image\/svg\+xml/);
     expect(svg.headers['content-security-policy']).toBe('sandbox');
@@ -49,7 +56,9 @@ describe('share links', () => {
 
   it('stop at their expiry', async () => {
     const id = await newPattern();
-    const made = await as(owner, request(h.app).post(`/api/patterns/${id}/shares`)).send({ expiresInDays: 1 }).expect(201);
+    const made = await as(owner, request(h.app).post(`/api/patterns/${id}/shares`))
+      .send({ expiresInDays: 1 })
+      .expect(201);
     await request(h.app).get(`/api/shared/${made.body.token}`).expect(200);
     await h.db.models.ShareLink.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { id: made.body.id } });
     await request(h.app).get(`/api/shared/${made.body.token}`).expect(404);
@@ -57,17 +66,27 @@ describe('share links', () => {
 
   it('refuse a tampered token', async () => {
     const id = await newPattern();
-    const { token } = (await as(owner, request(h.app).post(`/api/patterns/${id}/shares`)).send({}).expect(201)).body;
+    const { token } = (
+      await as(owner, request(h.app).post(`/api/patterns/${id}/shares`))
+        .send({})
+        .expect(201)
+    ).body;
     const flipped = (token[0] === 'A' ? 'B' : 'A') + token.slice(1);
     await request(h.app).get(`/api/shared/${flipped}`).expect(404);
-    await request(h.app).get(`/api/shared/${token.slice(0, -1)}`).expect(404);
+    await request(h.app)
+      .get(`/api/shared/${token.slice(0, -1)}`)
+      .expect(404);
     await request(h.app).get(`/api/shared/${token}x`).expect(404);
     await request(h.app).get(`/api/shared/${token}`).expect(200);
   });
 
   it('are stored as hashes only', async () => {
     const id = await newPattern();
-    const { token } = (await as(owner, request(h.app).post(`/api/patterns/${id}/shares`)).send({}).expect(201)).body;
+    const { token } = (
+      await as(owner, request(h.app).post(`/api/patterns/${id}/shares`))
+        .send({})
+        .expect(201)
+    ).body;
     const rows = await h.db.models.ShareLink.findAll({ where: { patternId: id }, raw: true });
     expect(JSON.stringify(rows)).not.toContain(token);
   });
@@ -76,8 +95,13 @@ describe('share links', () => {
 describe('invitations', () => {
   it('mail a new tester a single-use link that sets a password and opens the pattern', async () => {
     const id = await newPattern();
-    const res = await as(owner, request(h.app).post(`/api/patterns/${id}/invites`)).send({ email: 'Wren.Hollis@Example.com', name: 'Wren Hollis' }).expect(201);
-    expect(res.body).toMatchObject({ created: true, tester: { email: 'wren.hollis@example.com', name: 'Wren Hollis' } });
+    const res = await as(owner, request(h.app).post(`/api/patterns/${id}/invites`))
+      .send({ email: 'Wren.Hollis@Example.com', name: 'Wren Hollis' })
+      .expect(201);
+    expect(res.body).toMatchObject({
+      created: true,
+      tester: { email: 'wren.hollis@example.com', name: 'Wren Hollis' },
+    });
     const [mail] = await outbox();
     expect(mail!.to).toEqual(['wren.hollis@example.com']);
     expect(mail!.subject).toBe('Ines Marlow invited you to test "Harbour Band"');
@@ -99,15 +123,21 @@ describe('invitations', () => {
 
   it('will not turn a designer into a tester', async () => {
     const id = await newPattern();
-    const res = await as(owner, request(h.app).post(`/api/patterns/${id}/invites`)).send({ email: 'admin@example.com' });
+    const res = await as(owner, request(h.app).post(`/api/patterns/${id}/invites`)).send({
+      email: 'admin@example.com',
+    });
     expect(res.status).toBe(409);
   });
 });
 
 describe('sign-in and passwords', () => {
   it('answers a wrong password and an unknown address alike', async () => {
-    const wrong = await request(h.app).post('/api/auth/login').send({ email: 'designer@example.com', password: 'nope-nope' });
-    const unknown = await request(h.app).post('/api/auth/login').send({ email: 'nobody@example.com', password: 'nope-nope' });
+    const wrong = await request(h.app)
+      .post('/api/auth/login')
+      .send({ email: 'designer@example.com', password: 'nope-nope' });
+    const unknown = await request(h.app)
+      .post('/api/auth/login')
+      .send({ email: 'nobody@example.com', password: 'nope-nope' });
     expect([wrong.status, unknown.status]).toEqual([401, 401]);
     expect(wrong.body).toEqual(unknown.body);
   });
@@ -136,8 +166,12 @@ describe('sign-in and passwords', () => {
 
   it('signs out by revoking the session token, and changes a password', async () => {
     const token = await login(h, 'admin@example.com');
-    await as(token, request(h.app).post('/api/auth/password')).send({ current: 'wrong-one', password: 'admin-new-pass' }).expect(400);
-    await as(token, request(h.app).post('/api/auth/password')).send({ current: 'test-password-1', password: 'admin-new-pass' }).expect(204);
+    await as(token, request(h.app).post('/api/auth/password'))
+      .send({ current: 'wrong-one', password: 'admin-new-pass' })
+      .expect(400);
+    await as(token, request(h.app).post('/api/auth/password'))
+      .send({ current: 'test-password-1', password: 'admin-new-pass' })
+      .expect(204);
     await login(h, 'admin@example.com', 'admin-new-pass');
     await as(token, request(h.app).post('/api/auth/logout')).expect(204);
     await as(token, request(h.app).get('/api/auth/me')).expect(401);
@@ -146,7 +180,8 @@ describe('sign-in and passwords', () => {
   it('limits sign-in attempts per address', async () => {
     const strict = await startHarness({ loginLimit: 3 });
     try {
-      const attempt = () => request(strict.app).post('/api/auth/login').send({ email: 'designer@example.com', password: 'guess-guess' });
+      const attempt = () =>
+        request(strict.app).post('/api/auth/login').send({ email: 'designer@example.com', password: 'guess-guess' });
       for (let i = 0; i < 3; i++) expect((await attempt()).status).toBe(401);
       const limited = await attempt();
       expect(limited.status).toBe(429);

@@ -20,7 +20,15 @@ describe('uploads', () => {
     // Source: NOTATION.md section 8, flat panel n units x r rows.
     const res = await post().attach('file', Buffer.from(SAMPLE), 'harbour.ffp').expect(201);
     const [item] = res.body.items;
-    expect(item).toMatchObject({ title: 'Harbour Band', layout: 'flat', rows: 2, units: 6, beads: 17, errors: 0, version: 1 });
+    expect(item).toMatchObject({
+      title: 'Harbour Band',
+      layout: 'flat',
+      rows: 2,
+      units: 6,
+      beads: 17,
+      errors: 0,
+      version: 1,
+    });
     expect(item.colors.map((c: { key: string }) => c.key)).toEqual(['A', 'B']);
   });
 
@@ -32,14 +40,18 @@ describe('uploads', () => {
     expect(error.id).toBe('bead-count');
     // "row 2: BAB ABB AB": the second unit starts at column 12 of line 11.
     expect(error.range).toMatchObject({ line: 11, column: 12 });
-    const detail = await request(h.app).get(`/api/patterns/${item.id}`).set('Authorization', `Bearer ${token}`).expect(200);
+    const detail = await request(h.app)
+      .get(`/api/patterns/${item.id}`)
+      .set('Authorization', `Bearer ${token}`)
+      .expect(200);
     expect(detail.body.source).toBe(BROKEN);
   });
 
   it('takes many files in one request', async () => {
     const before = await patternCount();
     let req = post();
-    for (let i = 0; i < 50; i++) req = req.attach('file', Buffer.from(SAMPLE.replace('Harbour Band', `Band ${i}`)), `band-${i}.ffp`);
+    for (let i = 0; i < 50; i++)
+      req = req.attach('file', Buffer.from(SAMPLE.replace('Harbour Band', `Band ${i}`)), `band-${i}.ffp`);
     const res = await req.expect(201);
     expect(res.body.items).toHaveLength(50);
     expect(await patternCount()).toBe(before + 50);
@@ -89,7 +101,11 @@ describe('uploads', () => {
       for (let i = 0; i < 4; i++) req = req.attach('file', Buffer.from(SAMPLE), `band-${i}.ffp`);
       const res = await req;
       expect(res.status).toBe(500);
-      expect(res.body.error).toEqual({ code: 'internal', message: 'Something went wrong on the server.', details: null });
+      expect(res.body.error).toEqual({
+        code: 'internal',
+        message: 'Something went wrong on the server.',
+        details: null,
+      });
     } finally {
       spy.mockRestore();
     }

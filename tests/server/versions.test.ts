@@ -26,12 +26,18 @@ async function newPattern(): Promise<number> {
 describe('versions', () => {
   it('makes a new version only when the text changes', async () => {
     const id = await newPattern();
-    const same = await as(owner, request(h.app).put(`/api/patterns/${id}`)).send({ source: SAMPLE }).expect(200);
+    const same = await as(owner, request(h.app).put(`/api/patterns/${id}`))
+      .send({ source: SAMPLE })
+      .expect(200);
     expect(same.body).toMatchObject({ created: false, pattern: { version: 1 } });
-    const changed = await as(owner, request(h.app).put(`/api/patterns/${id}`)).send({ source: LONGER }).expect(200);
+    const changed = await as(owner, request(h.app).put(`/api/patterns/${id}`))
+      .send({ source: LONGER })
+      .expect(200);
     // Flat panel 3 x 3: n(r+1) + r(n+1) = 3*4 + 3*4 = 24 (NOTATION.md section 8).
     expect(changed.body).toMatchObject({ created: true, pattern: { version: 2, rows: 3, beads: 24, source: LONGER } });
-    await as(owner, request(h.app).put(`/api/patterns/${id}`)).send({ source: LONGER }).expect(200);
+    await as(owner, request(h.app).put(`/api/patterns/${id}`))
+      .send({ source: LONGER })
+      .expect(200);
     const versions = await as(owner, request(h.app).get(`/api/patterns/${id}/versions`)).expect(200);
     expect(versions.body.items.map((v: { number: number }) => v.number)).toEqual([2, 1]);
     // The content hash is the SHA-256 of the UTF-8 text, checked against node:crypto as a reference.
@@ -41,7 +47,9 @@ describe('versions', () => {
 
   it('serves any version by ?version=N, and 404 for one that does not exist', async () => {
     const id = await newPattern();
-    await as(owner, request(h.app).put(`/api/patterns/${id}`)).send({ source: LONGER }).expect(200);
+    await as(owner, request(h.app).put(`/api/patterns/${id}`))
+      .send({ source: LONGER })
+      .expect(200);
     const v1 = await as(owner, request(h.app).get(`/api/patterns/${id}?version=1`)).expect(200);
     expect(v1.body).toMatchObject({ source: SAMPLE, viewing: { version: 1 }, version: 2 });
     const t1 = await as(owner, request(h.app).get(`/api/patterns/${id}/tally?version=1`)).expect(200);
@@ -56,35 +64,55 @@ describe('versions', () => {
 
   it('keeps a note on later versions while its row exists, marked with its version', async () => {
     const id = await newPattern();
-    await as(owner, request(h.app).post(`/api/patterns/${id}/invites`)).send({ email: 'tester@example.com' }).expect(201);
-    await as(owner, request(h.app).put(`/api/patterns/${id}`)).send({ source: LONGER }).expect(200);
-    const onRow3 = await as(tester, request(h.app).post(`/api/patterns/${id}/feedback`)).send({ row: 3, unit: 2, text: 'Lost count here.' }).expect(201);
+    await as(owner, request(h.app).post(`/api/patterns/${id}/invites`))
+      .send({ email: 'tester@example.com' })
+      .expect(201);
+    await as(owner, request(h.app).put(`/api/patterns/${id}`))
+      .send({ source: LONGER })
+      .expect(200);
+    const onRow3 = await as(tester, request(h.app).post(`/api/patterns/${id}/feedback`))
+      .send({ row: 3, unit: 2, text: 'Lost count here.' })
+      .expect(201);
     expect(onRow3.body).toMatchObject({ version: 2, row: 3, unit: 2, status: 'open' });
-    await as(tester, request(h.app).post(`/api/patterns/${id}/feedback`)).send({ row: 1, text: 'Fine.', version: 1 }).expect(201);
-    await as(tester, request(h.app).post(`/api/patterns/${id}/feedback`)).send({ row: 9, text: 'No such row.' }).expect(400);
+    await as(tester, request(h.app).post(`/api/patterns/${id}/feedback`))
+      .send({ row: 1, text: 'Fine.', version: 1 })
+      .expect(201);
+    await as(tester, request(h.app).post(`/api/patterns/${id}/feedback`))
+      .send({ row: 9, text: 'No such row.' })
+      .expect(400);
     // Version 3 drops row 3 again: the row-3 note no longer shows, the row-1 note (written on v1) still does.
-    await as(owner, request(h.app).put(`/api/patterns/${id}`)).send({ source: `${SAMPLE}# shorter again\n` }).expect(200);
+    await as(owner, request(h.app).put(`/api/patterns/${id}`))
+      .send({ source: `${SAMPLE}# shorter again\n` })
+      .expect(200);
     const now = await as(owner, request(h.app).get(`/api/patterns/${id}/feedback`)).expect(200);
     expect(now.body.items.map((f: { row: number; version: number }) => [f.row, f.version])).toEqual([[1, 1]]);
     const onV2 = await as(owner, request(h.app).get(`/api/patterns/${id}/feedback?version=2`)).expect(200);
     expect(onV2.body.items).toHaveLength(2);
-    const resolved = await as(owner, request(h.app).patch(`/api/patterns/${id}/feedback/${onRow3.body.id}`)).send({ status: 'resolved' }).expect(200);
+    const resolved = await as(owner, request(h.app).patch(`/api/patterns/${id}/feedback/${onRow3.body.id}`))
+      .send({ status: 'resolved' })
+      .expect(200);
     expect(resolved.body.status).toBe('resolved');
     expect(resolved.body.resolvedAt).toBeTypeOf('string');
   });
 
   it('keeps a place per user', async () => {
     const id = await newPattern();
-    await as(owner, request(h.app).post(`/api/patterns/${id}/invites`)).send({ email: 'tester@example.com' }).expect(201);
+    await as(owner, request(h.app).post(`/api/patterns/${id}/invites`))
+      .send({ email: 'tester@example.com' })
+      .expect(201);
     expect((await as(tester, request(h.app).get(`/api/patterns/${id}/place`))).body).toEqual({ row: null, unit: null });
-    await as(tester, request(h.app).put(`/api/patterns/${id}/place`)).send({ row: 2, unit: 3 }).expect(200);
+    await as(tester, request(h.app).put(`/api/patterns/${id}/place`))
+      .send({ row: 2, unit: 3 })
+      .expect(200);
     expect((await as(tester, request(h.app).get(`/api/patterns/${id}/place`))).body).toEqual({ row: 2, unit: 3 });
     expect((await as(owner, request(h.app).get(`/api/patterns/${id}/place`))).body).toEqual({ row: null, unit: null });
   });
 
   it('deletes a pattern with everything hanging off it', async () => {
     const id = await newPattern();
-    await as(owner, request(h.app).put(`/api/patterns/${id}`)).send({ source: LONGER }).expect(200);
+    await as(owner, request(h.app).put(`/api/patterns/${id}`))
+      .send({ source: LONGER })
+      .expect(200);
     await as(owner, request(h.app).delete(`/api/patterns/${id}`)).expect(204);
     expect(await h.db.models.Version.count({ where: { patternId: id } })).toBe(0);
     await as(owner, request(h.app).get(`/api/patterns/${id}`)).expect(404);
@@ -99,12 +127,22 @@ describe('versions', () => {
       .expect(201);
     expect(made.body.role).toBe('designer');
     const lister = await login(h, 'lister@example.com', 'long-enough-1');
-    for (const [title, rows] of [['Cobalt Cuff', 1], ['amber 100% Band', 2], ['Birch Strip', 3]] as const) {
-      const source = SAMPLE.replace('Harbour Band', title).replace(/row 2:.*\n/, rows >= 2 ? 'row 2: BAB AB AB\n' : '') + (rows === 3 ? 'row 3: BAB AB AB\n' : '');
+    for (const [title, rows] of [
+      ['Cobalt Cuff', 1],
+      ['amber 100% Band', 2],
+      ['Birch Strip', 3],
+    ] as const) {
+      const source =
+        SAMPLE.replace('Harbour Band', title).replace(/row 2:.*\n/, rows >= 2 ? 'row 2: BAB AB AB\n' : '') +
+        (rows === 3 ? 'row 3: BAB AB AB\n' : '');
       await as(lister, request(h.app).post('/api/patterns')).send({ source }).expect(201);
     }
     const byTitle = await as(lister, request(h.app).get('/api/patterns?sort=title')).expect(200);
-    expect(byTitle.body.items.map((p: { title: string }) => p.title)).toEqual(['amber 100% Band', 'Birch Strip', 'Cobalt Cuff']);
+    expect(byTitle.body.items.map((p: { title: string }) => p.title)).toEqual([
+      'amber 100% Band',
+      'Birch Strip',
+      'Cobalt Cuff',
+    ]);
     const byBeads = await as(lister, request(h.app).get('/api/patterns?sort=beads&dir=asc')).expect(200);
     // Strip of 3 units: 3n + 1 = 10; then 17 and 24 (NOTATION.md section 8).
     expect(byBeads.body.items.map((p: { beads: number }) => p.beads)).toEqual([10, 17, 24]);

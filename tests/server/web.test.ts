@@ -44,7 +44,11 @@ describe('web app and API together', () => {
     const token = await makeUser(h, admin, 'designer', 'promoted@example.com');
     await request(app).get('/api/users').set('Authorization', `Bearer ${token}`).expect(403);
     const id = (await h.db.models.User.findOne({ where: { email: 'promoted@example.com' } }))!.id;
-    await request(app).patch(`/api/users/${id}`).set('Authorization', `Bearer ${admin}`).send({ role: 'admin' }).expect(200);
+    await request(app)
+      .patch(`/api/users/${id}`)
+      .set('Authorization', `Bearer ${admin}`)
+      .send({ role: 'admin' })
+      .expect(200);
     await request(app).get('/api/users').set('Authorization', `Bearer ${token}`).expect(200);
     await request(app).delete(`/api/users/${id}`).set('Authorization', `Bearer ${admin}`).expect(204);
     await request(app).get('/api/auth/me').set('Authorization', `Bearer ${token}`).expect(401);
