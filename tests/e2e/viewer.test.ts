@@ -5,7 +5,7 @@
  * tester sees only that pattern and leaves a note the designer resolves.
  */
 import { execFile } from 'node:child_process';
-import { mkdtemp, readFile, rm, writeFile } from 'node:fs/promises';
+import { mkdtemp, readFile, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { promisify } from 'node:util';
@@ -14,22 +14,13 @@ import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { launchChromium, shot, watchErrors } from './browser.js';
 import { PASSWORD, startViewer, type Viewer } from './viewer-server.js';
 
-// An invented pattern of our own demo studio: a two-colour band of 4 rows of 3 units.
-const PATTERN = `title: Tidewater Band
-designer: Ines Marlow
-beads: 11/0 round
-layout: flat
-
-colors:
-  A  #F4F1EA  chalk
-  B  #2E6F8E  deep teal
-
-row 1: BBBB AAB BAB
-row 2: ABA BA AB
-note:  Keep the tension even so the units stay square.
-row 3: BAA AB BA
-row 4: AAB BB AA
-`;
+// Examples of the demo studio: Heron Band is a flat band 3 units wide and 12 rows long.
+const EXAMPLE = join(process.cwd(), 'examples', 'heron-band.ffp');
+const OTHER = join(process.cwd(), 'examples', 'tern-panel.ffp');
+const TITLE = 'Heron Band';
+/** Source: NOTATION.md section 8, a flat panel of n units by r rows has n(r + 1) + r(n + 1) beads. */
+const panelBeads = (n: number, r: number) => n * (r + 1) + r * (n + 1);
+const BEADS = panelBeads(3, 12);
 const TESTER = 'new.tester@example.com';
 
 let viewer: Viewer;
@@ -71,22 +62,19 @@ describe('designer and tester in the browser', () => {
   it('signs in, uploads a pattern, and sees a chart with as many beads as its tally', async () => {
     await signIn(page, 'designer@example.com');
     await shot(page, 'library');
-    const file = join(dir, 'tidewater-band.ffp');
-    await writeFile(file, PATTERN);
     await page.getByRole('link', { name: 'Upload', exact: true }).click();
-    await page.getByLabel('Pattern files', { exact: true }).setInputFiles(file);
-    await page.getByRole('article', { name: 'tidewater-band.ffp' }).getByText('No problems found').waitFor();
+    await page.getByLabel('Pattern files', { exact: true }).setInputFiles(EXAMPLE);
+    await page.getByRole('article', { name: 'heron-band.ffp' }).getByText('No problems found').waitFor();
     await shot(page, 'upload-checked');
     await page.getByRole('button', { name: 'Save this pattern' }).click();
     await page.waitForURL(/\/patterns\/\d+$/);
     patternId = Number(/\/patterns\/(\d+)$/.exec(page.url())![1]);
-    await page.getByRole('heading', { name: 'Tidewater Band', exact: true }).waitFor();
+    await page.getByRole('heading', { name: TITLE, exact: true }).waitFor();
 
     const tallyText = await page.getByTestId('tally-beads').textContent();
     const beads = await page.getByTestId('chart').locator('[data-bead]').count();
     expect(beads).toBe(Number(tallyText!.replace(/\D/g, '')));
-    // Source: NOTATION.md section 8, a flat panel of n units by r rows has n(r + 1) + r(n + 1) beads: 3 x 4 gives 31.
-    expect(beads).toBe(3 * 5 + 4 * 4);
+    expect(beads).toBe(BEADS);
     await page.getByTestId('chart').locator('[data-bead]').first().hover();
     expect(await page.getByTestId('bead-tooltip').textContent()).toMatch(/Row \d+, unit \d+, (base|far|top|near)/);
     await shot(page, 'pattern');
@@ -94,7 +82,7 @@ describe('designer and tester in the browser', () => {
 
   it('steps through a row with the arrow keys and finds the place again after a reload', async () => {
     expect(await placeText(page)).toBe('Row 1, unit 1 of 3');
-    await page.getByRole('heading', { name: 'Tidewater Band' }).click();
+    await page.getByRole('heading', { name: TITLE }).click();
     const saved = page.waitForResponse(
       (r) => r.url().endsWith(`/api/patterns/${patternId}/place`) && r.request().method() === 'PUT',
     );
@@ -115,13 +103,7 @@ describe('designer and tester in the browser', () => {
     ]);
     const got = await readFile((await download.path())!);
     const cliOut = join(dir, 'cli.svg');
-    await promisify(execFile)(process.execPath, [
-      'bin/fourfold.js',
-      'chart',
-      join(dir, 'tidewater-band.ffp'),
-      '-o',
-      cliOut,
-    ]);
+    await promisify(execFile)(process.execPath, ['bin/fourfold.js', 'chart', EXAMPLE, '-o', cliOut]);
     const want = await readFile(cliOut);
     expect(got.length).toBeGreaterThan(1000);
     expect(got.equals(want)).toBe(true);
@@ -137,8 +119,8 @@ describe('designer and tester in the browser', () => {
     const p = await stranger.newPage();
     const strangerErrors = watchErrors(p);
     await p.goto(shareUrl);
-    await p.getByRole('heading', { name: 'Tidewater Band' }).waitFor();
-    expect(await p.getByTestId('chart').locator('[data-bead]').count()).toBe(31);
+    await p.getByRole('heading', { name: TITLE }).waitFor();
+    expect(await p.getByTestId('chart').locator('[data-bead]').count()).toBe(BEADS);
     expect(await p.getByRole('button', { name: 'Sign out' }).count()).toBe(0);
     await p.keyboard.press('ArrowRight');
     expect(await placeText(p)).toBe('Row 1, unit 2 of 3');
@@ -177,7 +159,7 @@ describe('designer and tester in the browser', () => {
     await tp.getByRole('heading', { name: 'Library' }).waitFor();
     const rows = tp.locator('tbody tr');
     expect(await rows.count()).toBe(1);
-    expect(await rows.first().getByRole('link').textContent()).toBe('Tidewater Band');
+    expect(await rows.first().getByRole('link').textContent()).toBe(TITLE);
     await shot(tp, 'tester-library-phone');
 
     await rows.first().getByRole('link').click();
@@ -219,20 +201,24 @@ describe('designer and tester in the browser', () => {
     await editor.click();
     await page.keyboard.press('Control+End');
     // Unit 2 of a later row shares its near and base beads, so three keys are one too many.
-    await page.keyboard.type('row 5: AAB BAB AA');
+    await page.keyboard.type('row 13: AAB BAB AA');
     await page.getByRole('heading', { name: 'Checks: 1 error' }).waitFor();
     expect(await page.getByText(/bead-count/).count()).toBeGreaterThan(0);
     await shot(page, 'editor-error');
     for (let i = 0; i < 'BAB AA'.length; i++) await page.keyboard.press('Backspace');
     await page.keyboard.type('BA AB');
     await page.getByRole('heading', { name: 'Checks: No problems found' }).waitFor();
-    // Source: NOTATION.md section 8, the panel is now 3 units by 5 rows: 3 x 6 + 5 x 4 = 38 beads.
-    await page.waitForFunction(`document.querySelectorAll('[data-testid="chart"] [data-bead]').length === 38`);
+    // One more row of the same width: 3 by 13.
+    await page.waitForFunction(
+      `document.querySelectorAll('[data-testid="chart"] [data-bead]').length === ${panelBeads(3, 13)}`,
+    );
     await page.getByRole('button', { name: 'Save as a new version' }).click();
     await page.waitForURL(new RegExp(`/patterns/${patternId}$`));
     await page.getByText('Version 2 against version 1').waitFor();
-    expect(await page.getByTestId('count-changes').textContent()).toContain('beads: 31 → 38 (+7)');
-    expect(await page.getByTestId('chart').locator('[data-bead]').count()).toBe(38);
+    expect(await page.getByTestId('count-changes').textContent()).toContain(
+      `beads: ${BEADS} → ${panelBeads(3, 13)} (+7)`,
+    );
+    expect(await page.getByTestId('chart').locator('[data-bead]').count()).toBe(panelBeads(3, 13));
     await shot(page, 'versions');
     expect(errors).toEqual([]);
   });
@@ -240,9 +226,9 @@ describe('designer and tester in the browser', () => {
   it('lays the pattern out for print with every row of steps and the small-parts caution', async () => {
     await page.getByRole('link', { name: 'Print' }).click();
     await page.getByRole('heading', { name: 'Steps' }).waitFor();
-    expect(await page.getByRole('heading', { name: /^Row \d+: / }).count()).toBe(5);
+    expect(await page.getByRole('heading', { name: /^Row \d+: / }).count()).toBe(13);
     expect(await page.getByText(/Seed beads and needles are small parts/).count()).toBeGreaterThan(0);
-    expect(await page.getByTestId('chart').locator('[data-bead]').count()).toBe(38);
+    expect(await page.getByTestId('chart').locator('[data-bead]').count()).toBe(panelBeads(3, 13));
     await page.emulateMedia({ media: 'print' });
     expect(await page.getByRole('button', { name: 'Print' }).isVisible()).toBe(false);
     await shot(page, 'print');
@@ -274,12 +260,12 @@ describe('designer and tester in the browser', () => {
     const made = await fetch(`${viewer.url}/api/patterns`, {
       method: 'POST',
       headers: { 'Content-Type': 'application/json', Authorization: `Bearer ${token}` },
-      body: JSON.stringify({ source: PATTERN.replace('Tidewater Band', 'Private Band') }),
+      body: JSON.stringify({ source: await readFile(OTHER, 'utf8') }),
     });
     const other = ((await made.json()) as { items: { id: number }[] }).items[0]!.id;
     await tp.goto(`${viewer.url}/patterns/${other}`);
     await tp.getByRole('heading', { name: 'Not found' }).waitFor();
-    expect(await tp.getByText('Private Band').count()).toBe(0);
+    expect(await tp.getByText('Tern Panel').count()).toBe(0);
     await shot(tp, 'not-found');
     await tester.close();
   });
