@@ -2,6 +2,8 @@ import { describe, expect, test } from 'vitest';
 import { renderChartFiles, renderChartSvg } from '../../bin/render/chart-files.js';
 import { buildScene } from '../../shared/chart/scene.js';
 import { sceneToSvg } from '../../shared/chart/svg-text.js';
+import { HIGHLIGHT_CLASS } from '../../shared/chart/svg-dom.js';
+import { drawOnSvgdom } from './parity.js';
 import { checkLabelContrast, checkParity, checkRaster, checkSvg } from './chart-checks.js';
 import { stripModel } from './fixture.js';
 import { flatten } from './svg-tree.js';
@@ -106,6 +108,26 @@ describe('chart of a hand-made strip', () => {
     for (const options of [{}, { numbers: true, thread: 1, theme: 'print' as const, scale: 'mm' as const }]) {
       const scene = buildScene(model, options).value;
       checkParity(scene, sceneToSvg(scene));
+    }
+  });
+
+  test('the drawing finds beads and highlights one unit at a time', () => {
+    const model = stripModel(3);
+    const { handle } = drawOnSvgdom(buildScene(model, { numbers: true }).value);
+    try {
+      expect(handle.bead(5)?.attr('data-bead')).toBe(5);
+      expect(handle.bead(99)).toBeNull();
+      const classed = () => handle.svg.find(`.${HIGHLIGHT_CLASS}`).map((el) => String(el.attr('id')));
+      handle.highlightUnit(1);
+      // The unit's cell, the beads it picked up, its cue and its number.
+      expect(classed().sort()).toEqual(['ff-bead-4', 'ff-bead-5', 'ff-bead-6', 'ff-cell-1', 'ff-cue-1', 'ff-unit-1']);
+      handle.highlightUnit(2);
+      expect(classed()).toContain('ff-cell-2');
+      expect(classed()).not.toContain('ff-cell-1');
+      handle.highlightUnit(null);
+      expect(classed()).toEqual([]);
+    } finally {
+      handle.remove();
     }
   });
 
