@@ -3,6 +3,7 @@
  * while it computes); then each request's rows are written in one
  * transaction, so a failed upload leaves nothing behind.
  */
+import type { Transaction } from 'sequelize';
 import type { Db } from './db/connect.js';
 import type { PatternAttributes, PatternInstance } from './models/pattern.js';
 import type { UserInstance } from './models/user.js';
@@ -62,16 +63,19 @@ export async function addVersion(
   source: string,
 ): Promise<{ created: boolean; version: number }> {
   const { Pattern, Version } = db.models;
-  const current = await Version.findOne({
-    where: { patternId: pattern.id, number: pattern.currentVersion },
-    attributes: ['contentHash'],
-  });
-  if (current?.contentHash === contentHash(source)) return { created: false, version: pattern.currentVersion };
+  const hash = contentHash(source);
+  const sameAs = async (number: number, transaction?: Transaction) =>
+    (await Version.findOne({ where: { patternId: pattern.id, number }, attributes: ['contentHash'], transaction }))
+      ?.contentHash === hash;
+  // Cheap check first, so an unchanged push does not run the engine.
+  if (await sameAs(pattern.currentVersion)) return { created: false, version: pattern.currentVersion };
   const analysis = await analyse(source);
   return db.sequelize.transaction(async (transaction) => {
-    // Lock the pattern row so two saves at once get consecutive numbers.
+    // Lock the pattern row so two saves at once get consecutive numbers, and look again under the lock.
     const locked = await Pattern.findByPk(pattern.id, { transaction, lock: transaction.LOCK.UPDATE });
-    const number = (locked?.currentVersion ?? pattern.currentVersion) + 1;
+    const current = locked?.currentVersion ?? pattern.currentVersion;
+    if (await sameAs(current, transaction)) return { created: false, version: current };
+    const number = current + 1;
     await Version.create(
       { patternId: pattern.id, number, authorId: author.id, ...versionFields(analysis, source) },
       { transaction },

@@ -154,3 +154,20 @@ describe('versions', () => {
     await as(lister, request(h.app).get('/api/patterns?pageSize=1000')).expect(400);
   });
 });
+
+describe('versions under concurrent saves', () => {
+  it('gives two different saves consecutive numbers and two identical saves one version', async () => {
+    const id = await newPattern();
+    const put = (source: string) => as(owner, request(h.app).put(`/api/patterns/${id}`)).send({ source });
+    const [a, b] = await Promise.all([put(LONGER), put(`${SAMPLE}# note\n`)]);
+    expect([a.body.created, b.body.created]).toEqual([true, true]);
+    const numbers = (await as(owner, request(h.app).get(`/api/patterns/${id}/versions`))).body.items.map(
+      (v: { number: number }) => v.number,
+    );
+    expect(numbers).toEqual([3, 2, 1]);
+    const same = `${SAMPLE}# same twice\n`;
+    const twice = await Promise.all([put(same), put(same)]);
+    expect(twice.map((r) => r.body.created).sort()).toEqual([false, true]);
+    expect(await h.db.models.Version.count({ where: { patternId: id } })).toBe(4);
+  });
+});
