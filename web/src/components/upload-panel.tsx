@@ -43,7 +43,7 @@ export function UploadPanel({ onSaved }: { onSaved(items: UploadedItem[]): void 
     <div className="space-y-6">
       <div
         {...getRootProps({
-          className: `card flex min-h-32 cursor-pointer flex-col items-center justify-center border-2 border-dashed text-center ${isDragActive ? 'bg-teal-50 dark:bg-slate-800' : ''}`,
+          className: `card flex min-h-32 cursor-pointer flex-col items-center justify-center border-2 border-dashed border-slate-500 text-center dark:border-slate-400 ${isDragActive ? 'bg-teal-50 dark:bg-slate-800' : ''}`,
           'aria-label': 'Drop pattern files here, or press Enter to choose files',
         })}
       >
