@@ -6,7 +6,7 @@
  */
 import type { Result } from './diagnostic.js';
 import type { LayoutInfo } from './model.js';
-import { BASE, type Weave, type WeaveUnit } from './weave-net.js';
+import { BASE, beadAt, cornerAt, type Weave, type WeaveUnit } from './weave-net.js';
 import { beadSize, unitSideMm } from './bead-sizes.js';
 
 export interface Geometry {
@@ -64,7 +64,7 @@ function gridLayout(w: Weave, g: Geometry): void {
     g.uy[id] = y0 + 0.5;
     if (u.failed) return;
     for (let k = 0; k < 4; k++) {
-      const j = u.corners[k]!;
+      const j = cornerAt(w, u.id, k);
       if (Number.isNaN(g.jx[j]!)) {
         // Corners 0 and 1 lie on the far side, 1 and 2 on the top.
         g.jx[j] = wrap(k < 2 ? farX : nearX);
@@ -72,7 +72,7 @@ function gridLayout(w: Weave, g: Geometry): void {
       }
     }
     for (let p = 0; p < 4; p++) {
-      const b = u.beads[p]!;
+      const b = beadAt(w, u.id, p);
       if (w.beadOwner[b] !== id) continue;
       // Places 0 and 2 (base, top) run along x; 1 and 3 (far, near) up the sides.
       const across = p % 2 === 0;
@@ -91,7 +91,7 @@ function unitAngles(w: Weave, ids: readonly number[], ja: readonly number[], k: 
   if (k === 0) return theta.map((_, i) => (TAU * (i + 0.5)) / n);
   ids.forEach((id, i) => {
     const u = w.units[id]!;
-    const b = u.beads[BASE]!;
+    const b = beadAt(w, u.id, BASE);
     const a = w.beadEnds[2 * b]!;
     const z = w.beadEnds[2 * b + 1]!;
     if (b >= 0 && a !== z && !Number.isNaN(ja[a]!) && !Number.isNaN(ja[z]!)) theta[i] = between(ja[a]!, ja[z]!);
@@ -139,10 +139,10 @@ function roundLayout(w: Weave, g: Geometry): void {
       const hi = k + 1 + r0;
       const after = k === 0 ? (TAU * (i + 1)) / n : t + ccw(t, next) / 2;
       const before = k === 0 ? (TAU * i) / n : prev + ccw(prev, t) / 2;
-      set(u.corners[3]!, before, lo);
-      set(u.corners[0]!, after, lo);
-      set(u.corners[1]!, after, hi);
-      set(u.corners[2]!, before, hi);
+      set(cornerAt(w, u.id, 3), before, lo);
+      set(cornerAt(w, u.id, 0), after, lo);
+      set(cornerAt(w, u.id, 1), after, hi);
+      set(cornerAt(w, u.id, 2), before, hi);
     });
   });
   for (let j = 0; j < w.junctionCount; j++) {

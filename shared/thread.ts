@@ -7,7 +7,7 @@
  */
 import type { Diagnostic, Result } from './diagnostic.js';
 import type { Corner, Place, StepAction, ThreadPass, UnitStep } from './model.js';
-import type { Weave, WeaveUnit } from './weave-net.js';
+import { beadAt, cornerAt, type Weave, type WeaveUnit } from './weave-net.js';
 import { findRoute, preferRoute, type Net } from './thread-route.js';
 
 export const PLACES: readonly Place[] = ['base', 'far', 'top', 'near'];
@@ -89,7 +89,8 @@ class Sim {
     const corners = u.shared === 0 ? [0] : startCorners(u.shared, dir);
     let best: { corner: number; route: number[] } | null = null;
     for (const corner of corners) {
-      const route = pos.j === -1 ? [] : findRoute(this.net, pos.j, pos.last, u.corners[corner]!, PASSAGE_LIMIT);
+      const route =
+        pos.j === -1 ? [] : findRoute(this.net, pos.j, pos.last, cornerAt(this.w, u.id, corner), PASSAGE_LIMIT);
       if (route && (!best || preferRoute(this.rank, route, best.route))) best = { corner, route };
     }
     return best;
@@ -135,17 +136,17 @@ class Sim {
     const actions: StepAction[] = record ? new Array<StepAction>(u.shared === 0 ? 5 : 4) : [];
     let k = 0;
     let last = -1;
-    let at = u.corners[corner]!;
+    let at = cornerAt(this.w, u.id, corner);
     const steps = u.shared === 0 ? 5 : 4;
     const ends = this.w.beadEnds;
     for (let i = 0; i < steps; i++) {
       const p = placeAt(corner, dir, i % 4);
-      const bead = u.beads[p]!;
+      const bead = beadAt(this.w, u.id, p);
       const e0 = ends[2 * bead]!;
       const e1 = ends[2 * bead + 1]!;
       if (at !== e0 && at !== e1) {
         // After a skip the shared beads of a unit do not meet: the thread crosses the bead passed over.
-        const entry = u.corners[dir === 1 ? p : (p + 3) % 4] === e0 ? e1 : e0;
+        const entry = cornerAt(this.w, u.id, dir === 1 ? p : (p + 3) % 4) === e0 ? e1 : e0;
         const bridge = findRoute(this.net, at, last, entry, PASSAGE_LIMIT) ?? [];
         for (const b of bridge) {
           const out = ends[2 * b] === at ? ends[2 * b + 1]! : ends[2 * b]!;
@@ -221,7 +222,8 @@ class Sim {
   private colour(u: WeaveUnit, picked: number[]): void {
     if (this.w.order === 'placed') {
       let k = 0;
-      for (let p = 0; p < 4; p++) if (((u.shared >> p) & 1) === 0) this.color[u.beads[p]!] = u.keys[k++] ?? '';
+      for (let p = 0; p < 4; p++)
+        if (((u.shared >> p) & 1) === 0) this.color[beadAt(this.w, u.id, p)] = u.keys[k++] ?? '';
     } else {
       for (let i = 0; i < picked.length; i++) this.color[picked[i]!] = u.keys[i] ?? '';
     }

@@ -7,7 +7,7 @@ import { fileStart, sortDiagnostics, type Diagnostic, type Result, type SourceRa
 import type { PatternAst } from '../parser/ast.js';
 import type { Bead, LayoutInfo, Model, Place, RowInfo, ThreadPass, Unit, UnitStep } from './model.js';
 import { weave } from './weave.js';
-import { popcount, type Weave } from './weave-net.js';
+import { beadAt, popcount, type Weave } from './weave-net.js';
 import { PLACES, thread, type Thread } from './thread.js';
 import { layout, type Geometry } from './layout.js';
 
@@ -56,7 +56,12 @@ function unitsOf(w: Weave, t: Thread, g: Geometry, id: (old: number) => number |
       row: u.row,
       index: u.index,
       mark: u.mark,
-      places: { base: id(u.beads[0]!), far: id(u.beads[1]!), top: id(u.beads[2]!), near: id(u.beads[3]!) },
+      places: {
+        base: id(beadAt(w, u.id, 0)),
+        far: id(beadAt(w, u.id, 1)),
+        top: id(beadAt(w, u.id, 2)),
+        near: id(beadAt(w, u.id, 3)),
+      },
       x: r4(g.ux[i]!),
       y: r4(g.uy[i]!),
       angle: r4(g.uAngle[i]!),

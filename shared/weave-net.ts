@@ -20,10 +20,8 @@ export interface WeaveUnit {
   mark: Mark;
   keys: string;
   range: SourceRange;
-  /** Bead at each place (base, far, top, near); -1 where there is none. */
-  beads: number[];
-  /** Junction at each corner (base|far, far|top, top|near, near|base); -1 where none. */
-  corners: number[];
+  /** Its id: its beads and corners are at 4 * id + place (or corner) in the net's unit arrays. */
+  id: number;
   /** Bit p is set when place p holds a bead placed by an earlier unit. */
   shared: number;
   failed: boolean;
@@ -48,6 +46,10 @@ export interface Weave {
   order: KeyOrder;
   units: WeaveUnit[];
   rows: WeaveRow[];
+  /** Bead at each place (base, far, top, near) of each unit, four a unit; -1 where there is none. */
+  unitBeads: number[];
+  /** Junction at each corner (base|far, far|top, top|near, near|base) of each unit, four a unit; -1 where none. */
+  unitCorners: number[];
   /** Per bead: its two ends, the unit that picks it up and its place there, the unit that shares it (-1) and its place. */
   beadEnds: number[];
   beadOwner: number[];
@@ -59,3 +61,8 @@ export interface Weave {
 
 export const popcount = (mask: number): number =>
   (mask & 1) + ((mask >> 1) & 1) + ((mask >> 2) & 1) + ((mask >> 3) & 1);
+
+/** The bead at place `p` of unit `u` (-1 for none). */
+export const beadAt = (w: Weave, u: number, p: number): number => w.unitBeads[4 * u + p]!;
+/** The junction at corner `k` of unit `u` (-1 for none). */
+export const cornerAt = (w: Weave, u: number, k: number): number => w.unitCorners[4 * u + k]!;

@@ -8,7 +8,18 @@ import type { Diagnostic, Result, SourceRange } from './diagnostic.js';
 import type { PatternAst, RowNode } from '../parser/ast.js';
 import { expandRow, type FlatItem } from '../parser/expand.js';
 import { UNIT_LIMIT } from '../parser/limits.js';
-import { BASE, FAR, NEAR, TOP, popcount, type Weave, type WeaveRow, type WeaveUnit } from './weave-net.js';
+import {
+  BASE,
+  FAR,
+  NEAR,
+  TOP,
+  beadAt,
+  cornerAt,
+  popcount,
+  type Weave,
+  type WeaveRow,
+  type WeaveUnit,
+} from './weave-net.js';
 import { weaveDiagnostic, beadCountDiagnostic, misplacedMark, misplacedSkip } from './weave-messages.js';
 
 /** One top bead of a row, as the next row meets it: its ends on the near and far side of the new row's direction. */
@@ -32,6 +43,8 @@ class Builder {
       order: ast.header.order,
       units: [],
       rows: [],
+      unitBeads: [],
+      unitCorners: [],
       beadEnds: [],
       beadOwner: [],
       beadOwnerPlace: [],
@@ -72,7 +85,12 @@ class Builder {
       const u = this.w.units[id]!;
       if (u.failed) continue;
       const turn = !this.closed;
-      slots.push({ bead: u.beads[TOP]!, nearJ: u.corners[turn ? 1 : 2]!, farJ: u.corners[turn ? 2 : 1]!, col: u.col });
+      slots.push({
+        bead: beadAt(this.w, u.id, TOP),
+        nearJ: cornerAt(this.w, u.id, turn ? 1 : 2),
+        farJ: cornerAt(this.w, u.id, turn ? 2 : 1),
+        col: u.col,
+      });
     }
     if (!this.closed) slots.reverse();
     return slots;
@@ -159,8 +177,7 @@ class Builder {
         mark: item.mark,
         keys: item.keys,
         range: item.range,
-        beads: [-1, -1, -1, -1],
-        corners: [-1, -1, -1, -1],
+        id,
         shared: 0,
         failed: true,
         col: 0,
@@ -168,12 +185,14 @@ class Builder {
         rowIndex,
       };
       w.units.push(unit);
+      w.unitBeads.push(-1, -1, -1, -1);
+      w.unitCorners.push(-1, -1, -1, -1);
       row.units.push(id);
       const before = first ? null : w.units[row.units[row.units.length - 2]!]!;
       const wantsBase = !firstRow && item.mark === '';
       const slot = slots[ptr];
-      if (before) unit.beads[NEAR] = before.beads[FAR]!;
-      if (wantsBase && slot) unit.beads[BASE] = slot.bead;
+      if (before) this.w.unitBeads[4 * unit.id + NEAR] = beadAt(this.w, before.id, FAR);
+      if (wantsBase && slot) this.w.unitBeads[4 * unit.id + BASE] = slot.bead;
       unit.col =
         wantsBase && slot ? slot.col : before ? before.col + h : item.mark === '*' ? (slot?.col ?? 0) - h : index - 1;
       if (misplaced) {
@@ -184,6 +203,8 @@ class Builder {
         // After a row that stopped early, running out of base beads is that row's error, already reported.
         if (prev?.complete === false) {
           w.units.pop();
+          w.unitBeads.length -= 4;
+          w.unitCorners.length -= 4;
           row.units.pop();
           return { row, complete: false };
         }
@@ -239,11 +260,11 @@ class Builder {
     nextSlot: BaseSlot | null,
     firstOfRow: WeaveUnit | null,
   ): void {
-    const c = u.corners;
+    const c = [-1, -1, -1, -1];
     if (before) {
-      c[3] = before.corners[0]!;
-      c[2] = before.corners[1]!;
-      this.share(before.beads[FAR]!, id, NEAR);
+      c[3] = cornerAt(this.w, before.id, 0);
+      c[2] = cornerAt(this.w, before.id, 1);
+      this.share(beadAt(this.w, before.id, FAR), id, NEAR);
     }
     if (base) {
       if (c[3] === -1) c[3] = base.nearJ;
@@ -251,16 +272,17 @@ class Builder {
       this.share(base.bead, id, BASE);
     }
     if (firstOfRow) {
-      c[0] = firstOfRow.corners[3]!;
-      c[1] = firstOfRow.corners[2]!;
-      u.beads[FAR] = firstOfRow.beads[NEAR]!;
-      this.share(u.beads[FAR], id, FAR);
+      c[0] = cornerAt(this.w, firstOfRow.id, 3);
+      c[1] = cornerAt(this.w, firstOfRow.id, 2);
+      this.w.unitBeads[4 * u.id + FAR] = beadAt(this.w, firstOfRow.id, NEAR);
+      this.share(beadAt(this.w, id, FAR), id, FAR);
     }
     if (u.mark === '*' && nextSlot) c[0] = nextSlot.nearJ;
     // A round increase builds on nothing: its base bead is a loop at the corner its neighbours' lower corners meet.
     if (u.mark === '+' && this.w.layout === 'round' && c[0] === -1) c[0] = c[3]!;
-    for (let k = 0; k < 4; k++) if (c[k] === -1) c[k] = this.junction();
-    for (let p = 0; p < 4; p++) if ((shared & (1 << p)) === 0) u.beads[p] = this.bead(id, p, c[(p + 3) % 4]!, c[p]!);
+    for (let k = 0; k < 4; k++) this.w.unitCorners[4 * id + k] = c[k] === -1 ? (c[k] = this.junction()) : c[k]!;
+    for (let p = 0; p < 4; p++)
+      if ((shared & (1 << p)) === 0) this.w.unitBeads[4 * u.id + p] = this.bead(id, p, c[(p + 3) % 4]!, c[p]!);
     u.shared = shared;
     u.failed = false;
   }
