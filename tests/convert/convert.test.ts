@@ -100,6 +100,19 @@ describe('convert a folder', () => {
     expect(summary.converted).toBe(1);
   });
 
+  test('outputs that cannot be written give exit 2 and say which file', async () => {
+    await writeFile(join(root, 'out'), 'a file where the output folder should be');
+    const summary = await convert(['patterns/fan.ffp'], { formats: ['svg'] });
+    expect(summary.exitCode).toBe(2);
+    expect(summary.files).toEqual([
+      expect.objectContaining({
+        rel: 'fan.ffp',
+        status: 'io-error',
+        message: expect.stringContaining("cannot write outputs of 'fan.ffp'"),
+      }),
+    ]);
+  });
+
   test('a glob mirrors the tree below its fixed part', async () => {
     const summary = await convert(['patterns/**/h*.ffp'], { formats: ['json'] });
     expect(summary.files.map((f) => [f.rel, f.status])).toEqual([['tubes/heron.ffp', 'converted']]);
