@@ -124,6 +124,11 @@ describe('designer and tester in the browser', () => {
     expect(await p.getByRole('button', { name: 'Sign out' }).count()).toBe(0);
     await p.keyboard.press('ArrowRight');
     expect(await placeText(p)).toBe('Row 1, unit 2 of 3');
+    // Without an account the place is kept in this browser, and found again after a reload.
+    await p.waitForFunction(`Object.keys(localStorage).some((k) => k.startsWith('fourfold.place.s.'))`);
+    await p.reload();
+    await p.getByTestId('stepper-place').waitFor();
+    expect(await placeText(p)).toBe('Row 1, unit 2 of 3');
     expect(await p.locator('html').getAttribute('class')).toMatch(/\bdark\b/);
     expect(await p.getByTestId('chart').locator('svg').first().getAttribute('data-theme')).toBe('dark');
     await shot(p, 'shared-view-dark');
