@@ -29,11 +29,20 @@ export function checkSvg(svg: string, expectedBeads: number): void {
   expect(svg).not.toMatch(/href=|url\((?!#|data:)/);
 }
 
-/** Every key letter against its own bead: WCAG 2.x asks 4.5:1 of normal text. */
+/** Every key letter against what is behind it (its bead, or its legend swatch): WCAG 2.x asks 4.5:1 of normal text. */
 export function checkLabelContrast(scene: Scene): void {
+  const swatches = new Map<string, string>();
   for (const item of scene.items) {
     if (item.kind === 'bead' && item.label)
       expect(contrastRatio(item.label.color, item.fill)).toBeGreaterThanOrEqual(4.5);
+    if (item.kind === 'rect' && item.role === 'legend-swatch' && typeof item.fill === 'string')
+      swatches.set(item.data.key!, item.fill);
+  }
+  for (const item of scene.items) {
+    if (item.kind !== 'text' || item.role !== 'legend-key') continue;
+    // In print the letter stands beside its hatched swatch, on the paper.
+    const behind = scene.theme === 'print' ? '#ffffff' : swatches.get(item.data.key!)!;
+    expect(contrastRatio(item.color, behind)).toBeGreaterThanOrEqual(4.5);
   }
 }
 
