@@ -129,20 +129,22 @@ export async function convertOne(task: ConvertTask): Promise<FileResult> {
       message: `${task.rel}:1:1: error[not-text]: this file is not UTF-8 text`,
     };
   }
-  const { value, diagnostics } = compile(text);
-  const firstError = diagnostics.find((d) => d.severity === 'error');
-  const base = outBase(task.outDir, task.rel);
+  let compiled: ReturnType<typeof compile>;
   let outputs: Array<[OutputFormat, string | Uint8Array]>;
   try {
-    outputs = await outputsOf(value.model, formats);
+    compiled = compile(text);
+    outputs = await outputsOf(compiled.value.model, formats);
   } catch (error) {
-    // A bug in a renderer, not the user's: say so, and go on with the other files.
+    // A bug in the engine or a renderer, not the user's: say so, and go on with the other files.
     return {
       rel: task.rel,
       status: 'failed',
-      message: `${task.rel}: internal error while rendering: ${(error as Error).message}`,
+      message: `${task.rel}: internal error: ${(error as Error).message}`,
     };
   }
+  const { diagnostics } = compiled;
+  const firstError = diagnostics.find((d) => d.severity === 'error');
+  const base = outBase(task.outDir, task.rel);
   try {
     for (const [format, data] of outputs) await writeFileAtomic(`${base}.${format}`, data);
     const stamp: Stamp = {
