@@ -53,7 +53,7 @@ async function signIn(p: Page, email: string, password = PASSWORD) {
   await p.getByLabel('E-mail').fill(email);
   await p.getByLabel('Password').fill(password);
   await p.getByRole('button', { name: 'Sign in' }).click();
-  await p.getByRole('heading', { name: 'Library' }).waitFor();
+  await p.getByRole('heading', { name: 'Library', exact: true }).waitFor();
 }
 
 const placeText = (p: Page) => p.getByTestId('stepper-place').textContent();
@@ -125,7 +125,13 @@ describe('designer and tester in the browser', () => {
     await p.keyboard.press('ArrowRight');
     expect(await placeText(p)).toBe('Row 1, unit 2 of 3');
     // Without an account the place is kept in this browser, and found again after a reload.
-    await p.waitForFunction(`Object.keys(localStorage).some((k) => k.startsWith('fourfold.place.s.'))`);
+    const kept = () =>
+      p.evaluate(() =>
+        Object.keys((globalThis as unknown as { localStorage: object }).localStorage).some((k) =>
+          k.startsWith('fourfold.place.s.'),
+        ),
+      );
+    await expect.poll(kept).toBe(true);
     await p.reload();
     await p.getByTestId('stepper-place').waitFor();
     expect(await placeText(p)).toBe('Row 1, unit 2 of 3');
@@ -161,7 +167,7 @@ describe('designer and tester in the browser', () => {
     await tp.getByLabel('New password', { exact: true }).fill('tester-pass-1');
     await tp.getByLabel('New password again').fill('tester-pass-1');
     await tp.getByRole('button', { name: 'Save the password and sign in' }).click();
-    await tp.getByRole('heading', { name: 'Library' }).waitFor();
+    await tp.getByRole('heading', { name: 'Library', exact: true }).waitFor();
     const rows = tp.locator('tbody tr');
     expect(await rows.count()).toBe(1);
     expect(await rows.first().getByRole('link').textContent()).toBe(TITLE);
@@ -207,16 +213,14 @@ describe('designer and tester in the browser', () => {
     await page.keyboard.press('Control+End');
     // Unit 2 of a later row shares its near and base beads, so three keys are one too many.
     await page.keyboard.type('row 13: AAB BAB AA');
-    await page.getByRole('heading', { name: 'Checks: 1 error' }).waitFor();
+    await page.getByRole('heading', { name: 'Checks: 1 error', exact: true }).waitFor();
     expect(await page.getByText(/bead-count/).count()).toBeGreaterThan(0);
     await shot(page, 'editor-error');
     for (let i = 0; i < 'BAB AA'.length; i++) await page.keyboard.press('Backspace');
     await page.keyboard.type('BA AB');
-    await page.getByRole('heading', { name: 'Checks: No problems found' }).waitFor();
+    await page.getByRole('heading', { name: 'Checks: No problems found', exact: true }).waitFor();
     // One more row of the same width: 3 by 13.
-    await page.waitForFunction(
-      `document.querySelectorAll('[data-testid="chart"] [data-bead]').length === ${panelBeads(3, 13)}`,
-    );
+    await expect.poll(() => page.getByTestId('chart').locator('[data-bead]').count()).toBe(panelBeads(3, 13));
     await page.getByRole('button', { name: 'Save as a new version' }).click();
     await page.waitForURL(new RegExp(`/patterns/${patternId}$`));
     await page.getByText('Version 2 against version 1').waitFor();
@@ -230,7 +234,8 @@ describe('designer and tester in the browser', () => {
 
   it('lays the pattern out for print with every row of steps and the small-parts caution', async () => {
     await page.getByRole('link', { name: 'Print' }).click();
-    await page.getByRole('heading', { name: 'Steps' }).waitFor();
+    await page.getByRole('heading', { name: 'Steps', exact: true }).waitFor();
+    await shot(page, 'print');
     expect(await page.getByRole('heading', { name: /^Row \d+: / }).count()).toBe(13);
     expect(await page.getByText(/Seed beads and needles are small parts/).count()).toBeGreaterThan(0);
     expect(await page.getByTestId('chart').locator('[data-bead]').count()).toBe(panelBeads(3, 13));
@@ -269,7 +274,7 @@ describe('designer and tester in the browser', () => {
     });
     const other = ((await made.json()) as { items: { id: number }[] }).items[0]!.id;
     await tp.goto(`${viewer.url}/patterns/${other}`);
-    await tp.getByRole('heading', { name: 'Not found' }).waitFor();
+    await tp.getByRole('heading', { name: 'Not found', exact: true }).waitFor();
     expect(await tp.getByText('Tern Panel').count()).toBe(0);
     await shot(tp, 'not-found');
     await tester.close();
@@ -284,7 +289,7 @@ describe('designer and tester in the browser', () => {
     await p.getByRole('link', { name: 'Admin' }).click();
     await p.getByRole('cell', { name: TESTER }).waitFor();
     expect(await p.getByLabel(`Role of new.tester`).inputValue()).toBe('tester');
-    await p.getByRole('heading', { name: 'Outbox (development)' }).waitFor();
+    await p.getByRole('heading', { name: 'Outbox (development)', exact: true }).waitFor();
     expect(await p.getByText(`to ${TESTER}`).count()).toBeGreaterThan(0);
     await shot(p, 'admin');
     expect(adminErrors).toEqual([]);
