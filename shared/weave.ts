@@ -191,8 +191,8 @@ class Builder {
       const before = first ? null : w.units[row.units[row.units.length - 2]!]!;
       const wantsBase = !firstRow && item.mark === '';
       const slot = slots[ptr];
-      if (before) this.w.unitBeads[4 * unit.id + NEAR] = beadAt(this.w, before.id, FAR);
-      if (wantsBase && slot) this.w.unitBeads[4 * unit.id + BASE] = slot.bead;
+      if (before) w.unitBeads[4 * id + NEAR] = beadAt(w, before.id, FAR);
+      if (wantsBase && slot) w.unitBeads[4 * id + BASE] = slot.bead;
       unit.col =
         wantsBase && slot ? slot.col : before ? before.col + h : item.mark === '*' ? (slot?.col ?? 0) - h : index - 1;
       if (misplaced) {
@@ -212,7 +212,7 @@ class Builder {
           'no-base-left',
           `${word} ${n}, unit ${index}: this unit needs a base bead, but ${word} ${below} has none left to build on`,
           item.range,
-          first ? undefined : "Mark an increase with '+' if a new unit beyond the row's end is meant.",
+          first || w.layout === 'tube' ? undefined : "Mark an increase with '+' if a new unit is meant here.",
         );
         return { row, complete: false };
       }
