@@ -74,9 +74,7 @@ async function nextState(until: (s: PreviewState) => boolean, change: () => Prom
 }
 
 const beadCount = () => page.getByTestId('chart').locator('[data-bead]').count();
-// A string, because the test code is type-checked for Node, where there is no document.
-const waitForBeads = (n: number) =>
-  page.waitForFunction(`document.querySelectorAll('[data-testid="chart"] [data-bead]').length === ${n}`);
+const waitForBeads = (n: number) => expect.poll(beadCount, { timeout: 10_000 }).toBe(n);
 
 describe('live preview', () => {
   it('sends a new model over the event stream when the file is saved', async () => {
