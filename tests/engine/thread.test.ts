@@ -122,6 +122,17 @@ describe('the rhythm of right angle weave (common practice)', () => {
     expect(before.moveOn.length).toBe(2);
   });
 
+  test("a later row's first unit goes the way with the shorter passages to it and on to the second unit", () => {
+    // Worked by hand from rules 1-4 (NOTATION.md section 4) for a panel 3 wide: row 1 ends forward at unit 3's
+    // near|base corner. Forward, row 2's first unit is reached through 3 beads and its second through 1 (4);
+    // backward, through 2 and then 4 (6). So it goes forward.
+    const m = compileAst(pattern('flat', panelRows(3, 2))).value.model;
+    expect(m.steps[2]).toMatchObject({ direction: 'forward', startCorner: 'near|base' });
+    expect(m.steps[2]!.moveOn.length).toBe(3);
+    expect(m.steps[3]).toMatchObject({ direction: 'forward', startCorner: 'base|far' });
+    expect(m.steps[3]!.moveOn.length).toBe(1);
+  });
+
   test('the unit closing row 1 of a tube alternates pick-ups and passes', () => {
     // Source: NOTATION.md section 4, rule 3 (the split case).
     const m = compileAst(pattern('tube', tubeRows(5, 1))).value.model;
