@@ -15,6 +15,7 @@ import { promisify } from 'node:util';
 import { createApp } from '../server/app.js';
 import { connect, migrate } from '../server/db/connect.js';
 import { openDatabase } from '../server/db/mariadb-launcher.js';
+import { closeEngine } from '../server/engine.js';
 import { issueSession } from '../server/auth.js';
 import { createMailer } from '../server/mail.js';
 import { seedDemo } from '../server/seed.js';
@@ -126,6 +127,7 @@ const bench: Bench = {
       return figures;
     } finally {
       await mailer.close();
+      await closeEngine();
       await db.close();
       await database.stop();
       await rm(dataDir, { recursive: true, force: true });

@@ -10,6 +10,7 @@ import { join, resolve } from 'node:path';
 import { createApp } from './app.js';
 import { connect, migrate } from './db/connect.js';
 import { openDatabase } from './db/mariadb-launcher.js';
+import { closeEngine } from './engine.js';
 import { createMailer } from './mail.js';
 import { DEFAULT_DEMO_PASSWORD, seedDemo } from './seed.js';
 
@@ -46,6 +47,7 @@ export async function startServer(options: ServeOptions): Promise<Running> {
   try {
     const db = connect(database.url);
     stack.push(() => db.close());
+    stack.push(closeEngine);
     const applied = await migrate(db.sequelize);
     if (applied.length) log(`applied migrations: ${applied.join(', ')}`);
     const demoPassword = env.FOURFOLD_DEMO_PASSWORD || DEFAULT_DEMO_PASSWORD;

@@ -11,7 +11,8 @@ import { renderKitHtml, renderKitMarkdown } from '../shared/kit.js';
 import type { Model } from '../shared/model.js';
 import { buildSteps } from '../shared/steps.js';
 import { renderStepsHtml, renderStepsMarkdown, renderStepsText } from '../shared/steps-render.js';
-import { DEFAULT_TAIL_MM, DEFAULT_WORKING_LENGTH_MM, tally, type Tally } from '../shared/tally.js';
+import { DEFAULT_TAIL_MM, DEFAULT_WORKING_LENGTH_MM } from '../shared/tally.js';
+import { tallyOf } from './engine.js';
 import { HttpError } from './errors.js';
 import { check } from './validate.js';
 
@@ -39,13 +40,6 @@ const json = (value: unknown): Rendered => ({
   type: 'application/json; charset=utf-8',
   body: `${JSON.stringify(value, null, 2)}\n`,
 });
-
-/** The tally of an error-free model, or null: like the CLI, no material list for a pattern that does not build. */
-export function tallyOf(model: Model): Tally | null {
-  if (hasErrors(model.diagnostics)) return null;
-  const result = tally(model, {});
-  return hasErrors(result.diagnostics) ? null : result.value;
-}
 
 function needsClean(model: Model): void {
   if (hasErrors(model.diagnostics)) {

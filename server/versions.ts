@@ -25,7 +25,7 @@ const patternFields = (
 
 const versionFields = (a: Analysis, source: string) => ({
   source,
-  model: a.model ? JSON.stringify(a.model) : null,
+  model: a.modelJson,
   diagnostics: a.diagnostics,
   contentHash: contentHash(source),
 });

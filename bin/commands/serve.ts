@@ -46,6 +46,8 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
   const given = cmd.options.port as number | undefined;
   const port = given !== undefined && given !== 8080 ? given : Number(io.env.PORT || given || 8080);
   const examples = cmd.options.examples ? resolve(io.cwd, cmd.options.examples as string) : undefined;
+  // Listen for Ctrl-C from the start, so a stop during start-up still stops MariaDB.
+  const stopped = untilSignal();
   await buildWebIfMissing(root, io);
   const { startServer } = await import('../../server/main.js');
   let running;
@@ -83,7 +85,7 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
     }
     io.stdout.write('Press Ctrl-C to stop.\n');
   }
-  const signal = await untilSignal();
+  const signal = await stopped;
   log(`${signal}: stopping...`);
   await running.close();
   log('stopped.');

@@ -3,7 +3,6 @@ import { Router } from 'express';
 import type { AppDeps } from '../context.js';
 import { analyse } from '../engine.js';
 import { hasErrors } from '../../shared/diagnostic.js';
-import { tallyOf } from '../render.js';
 import { acceptUploads, sourcesOf } from '../uploads.js';
 
 export function checkRoutes(_deps: AppDeps): Router {
@@ -17,7 +16,7 @@ export function checkRoutes(_deps: AppDeps): Router {
           ok: !hasErrors(analysis.diagnostics),
           title: analysis.title,
           diagnostics: analysis.diagnostics,
-          tally: analysis.model ? tallyOf(analysis.model) : null,
+          tally: analysis.tally,
         };
       }),
     );
