@@ -7,15 +7,16 @@
 import { fileStart, type Diagnostic, type SourceRange } from '../shared/diagnostic.js';
 import type { ItemNode, Layout, PatternAst, RowNode, UnitNode } from './ast.js';
 import { expandRow } from './expand.js';
+import { DiagnosticList } from './limits.js';
 import { suggest } from './suggest.js';
 import { COLORS_KEYS, HEADER_KEYS, NOTE_KEY } from './values.js';
 
-export function checkPattern(ast: PatternAst): Diagnostic[] {
-  const out: Diagnostic[] = [];
+export function checkPattern(ast: PatternAst): DiagnosticList {
+  const out = new DiagnosticList();
   checkKeys(ast, out);
   checkColors(ast, out);
   checkRowNumbers(ast.rows, out);
-  for (const row of ast.rows) checkMarks(row, ast.header.layout, out);
+  for (const row of ast.rows) if (!out.full) checkMarks(row, ast.header.layout, out);
   if (ast.rows.length === 0) {
     out.push({
       severity: 'error',
@@ -44,19 +45,19 @@ function checkKeys(ast: PatternAst, out: Diagnostic[]): void {
   }
 }
 
-function checkColors(ast: PatternAst, out: Diagnostic[]): void {
+function checkColors(ast: PatternAst, out: DiagnosticList): void {
   const first = new Map<string, number>();
   for (const c of ast.colors) {
     const line = first.get(c.key);
     if (line === undefined) first.set(c.key, c.range.line);
     else {
-      out.push({
+      out.add(() => ({
         severity: 'error',
         id: 'duplicate-color',
         message: `colour key '${c.key}' is defined twice; the first, on line ${line}, is used`,
         range: c.keyRange,
         hint: 'give each colour its own letter',
-      });
+      }));
     }
   }
   // Keys are A-Z, so sets of keys are 26-bit masks: this loop runs once per bead of the file.
@@ -84,13 +85,13 @@ function checkColors(ast: PatternAst, out: Diagnostic[]): void {
   }
   for (const c of ast.colors) {
     if (used & bit(c.key.charCodeAt(0)) || first.get(c.key) !== c.range.line) continue;
-    out.push({
+    out.add(() => ({
       severity: 'warning',
       id: 'unused-color',
       message: `colour '${c.key}'${c.name ? ` (${c.name})` : ''} is never used`,
       range: c.keyRange,
       hint: 'remove the line, or use the key in a row',
-    });
+    }));
   }
 }
 

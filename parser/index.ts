@@ -7,14 +7,23 @@ import type { PatternAst } from './ast.js';
 import { checkPattern } from './checks.js';
 import { parseTokens } from './grammar.js';
 import { lex } from './lexer.js';
-import { guardNesting, lineDiagnostics, MAX_BYTES, sizeDiagnostic, unitLimitDiagnostic, utf8Length } from './limits.js';
+import {
+  DiagnosticList,
+  guardNesting,
+  lineDiagnostics,
+  MAX_BYTES,
+  MAX_DIAGNOSTICS,
+  sizeDiagnostic,
+  unitLimitDiagnostic,
+  utf8Length,
+} from './limits.js';
 import { LineIndex } from './positions.js';
 import { toAst } from './to-ast.js';
 
 export type * from './ast.js';
 export { expandRow, type FlatItem } from './expand.js';
 export { format } from './format.js';
-export { countItems, MAX_BYTES, MAX_LINE, UNIT_LIMIT } from './limits.js';
+export { countItems, MAX_BYTES, MAX_DIAGNOSTICS, MAX_LINE, UNIT_LIMIT } from './limits.js';
 export { LineIndex } from './positions.js';
 
 /** An AST with nothing in it, for input that is refused before it is read. */
@@ -50,6 +59,7 @@ function parseText(input: string): Result<PatternAst> {
   const parsed = parseTokens(guarded.tokens);
   const ast = toAst(parsed.cst, ix, lexed.comments);
   const tooLarge = unitLimitDiagnostic(ast.value);
+  const checked = tooLarge ? new DiagnosticList(tooLarge) : checkPattern(ast.value);
   const diagnostics: Diagnostic[] = [
     ...lexed.diagnostics,
     ...guarded.diagnostics,
@@ -60,9 +70,28 @@ function parseText(input: string): Result<PatternAst> {
       range: ix.range(e.token.startOffset, e.token.startOffset + e.token.image.length),
     })),
     ...ast.diagnostics,
-    ...(tooLarge ? [tooLarge] : checkPattern(ast.value)),
+    ...checked,
   ];
-  return { value: ast.value, diagnostics: sortDiagnostics(diagnostics) };
+  return { value: ast.value, diagnostics: capped(diagnostics, ast.diagnostics.dropped + checked.dropped) };
+}
+
+function capped(all: Diagnostic[], dropped: number): Diagnostic[] {
+  if (all.length <= MAX_DIAGNOSTICS && dropped === 0) return sortDiagnostics(all);
+  // A numeric sort first: sorting a million diagnostics with the full comparison is slow.
+  const byPlace = [...all].sort((a, b) => a.range.offset - b.range.offset || a.range.endOffset - b.range.endOffset);
+  const kept = byPlace.slice(0, MAX_DIAGNOSTICS);
+  const more = all.length - kept.length + dropped;
+  const next = byPlace[kept.length] ?? kept[kept.length - 1]!;
+  return sortDiagnostics([
+    ...kept,
+    {
+      severity: 'info',
+      id: 'too-many-problems',
+      message: `${more.toLocaleString('en')} more problem${more === 1 ? '' : 's'} from here on are not listed`,
+      range: next.range,
+      hint: 'fix the problems above and check again',
+    },
+  ]);
 }
 
 export function parseBytes(bytes: Uint8Array): Result<PatternAst> {

@@ -1,6 +1,6 @@
 /**
- * The lexer: text to tokens plus the comments, with lexing errors turned into
- * diagnostics a designer can act on.
+ * The lexer: text to tokens plus the comments, with stray characters turned
+ * into diagnostics a designer can act on.
  */
 import { createTokenInstance, Lexer, type IToken } from 'chevrotain';
 import type { Diagnostic } from '../shared/diagnostic.js';
@@ -15,6 +15,9 @@ export interface Lexed {
   diagnostics: Diagnostic[];
 }
 
+/** Past this many, further stray characters add nothing a designer can use. */
+const MAX_LEXING_ERRORS = 1000;
+
 const ROW_LINE = /^[ \t]*(?:rows?|rounds?|[A-Za-z]{2,}[ \t]*\d)/i;
 
 export function lex(text: string, index: LineIndex): Lexed {
@@ -24,15 +27,24 @@ export function lex(text: string, index: LineIndex): Lexed {
   if (tokens.length > 0 && tokens[tokens.length - 1]!.tokenType !== LineEnd) {
     tokens.push(createTokenInstance(LineEnd, '', text.length, text.length - 1, NaN, NaN, NaN, NaN));
   }
-  const diagnostics = result.errors.map((e): Diagnostic => {
-    const range = index.range(e.offset, e.offset + e.length);
-    const found = text.slice(e.offset, e.offset + e.length);
-    const lineText = text.slice(index.lineStart(range.line), e.offset);
-    const inRow = ROW_LINE.test(lineText) && /[:\d]/.test(lineText);
+  const spans = strayRuns(result.groups.strays ?? []);
+  for (const e of result.errors) spans.push({ offset: e.offset, end: e.offset + e.length });
+  spans.sort((a, b) => a.offset - b.offset);
+  // Whether a line is a row is decided once per line: a line can hold thousands of stray characters.
+  const rowLine = new Map<number, boolean>();
+  const diagnostics = spans.slice(0, MAX_LEXING_ERRORS).map(({ offset, end }): Diagnostic => {
+    const range = index.range(offset, end);
+    let inRow = rowLine.get(range.line);
+    if (inRow === undefined) {
+      const start = index.lineStart(range.line);
+      const head = text.slice(start, Math.min(offset, start + 40));
+      inRow = ROW_LINE.test(head) && /[:\d]/.test(head);
+      rowLine.set(range.line, inRow);
+    }
     return {
       severity: 'error',
       id: 'syntax',
-      message: `'${printable(found)}' cannot stand here`,
+      message: `'${printable(text.slice(offset, end))}' cannot stand here`,
       range,
       hint: inRow
         ? "a row holds units of colour keys A-Z (optionally after '*' or '+'), groups like '(AB CB)x2', skips '-', and a comment after '#'"
@@ -40,6 +52,17 @@ export function lex(text: string, index: LineIndex): Lexed {
     };
   });
   return { tokens, comments: result.groups.comments ?? [], diagnostics };
+}
+
+/** Stray characters next to each other make one problem, not one per character. */
+function strayRuns(strays: IToken[]): { offset: number; end: number }[] {
+  const runs: { offset: number; end: number }[] = [];
+  for (const t of strays) {
+    const last = runs[runs.length - 1];
+    if (last && last.end === t.startOffset) last.end += t.image.length;
+    else runs.push({ offset: t.startOffset, end: t.startOffset + t.image.length });
+  }
+  return runs;
 }
 
 /** Shorten and make control characters visible so a message never breaks the terminal. */

@@ -14,6 +14,36 @@ export const MAX_LINE = 10_000;
 export const UNIT_LIMIT = 200_000;
 export const MAX_NESTING = 16;
 
+/** More than this many problems in one file is noise: the first ones are listed, and a note says how many more. */
+export const MAX_DIAGNOSTICS = 1000;
+
+/**
+ * A list of diagnostics that stops keeping them past MAX_DIAGNOSTICS and
+ * counts the rest, so a file of half a million bad lines does not build
+ * half a million messages. `full` lets a hot loop skip building one at all.
+ */
+export class DiagnosticList extends Array<Diagnostic> {
+  dropped = 0;
+
+  get full(): boolean {
+    return this.length >= MAX_DIAGNOSTICS;
+  }
+
+  /** Builds the diagnostic only if it will be kept. */
+  add(make: () => Diagnostic): void {
+    if (this.full) this.dropped++;
+    else super.push(make());
+  }
+
+  override push(...items: Diagnostic[]): number {
+    for (const d of items) {
+      if (this.length < MAX_DIAGNOSTICS) super.push(d);
+      else this.dropped++;
+    }
+    return this.length;
+  }
+}
+
 const tooLarge = (message: string, range: Diagnostic['range'], hint: string): Diagnostic => ({
   severity: 'error',
   id: 'too-large',

@@ -5,10 +5,11 @@
  * number or ':', an unclosed group, a lower-case key) are reported here.
  */
 import type { CstElement, CstNode, IToken } from 'chevrotain';
-import type { Diagnostic, Result, SourceRange } from '../shared/diagnostic.js';
+import type { SourceRange } from '../shared/diagnostic.js';
 import type { ColorDef, Comment, GroupNode, HeaderEntry, ItemNode, NoteNode, PatternAst, RowNode } from './ast.js';
 import { parser } from './grammar.js';
 import type { LineIndex } from './positions.js';
+import { DiagnosticList } from './limits.js';
 import { didYouMean, suggest } from './suggest.js';
 import { badColor, colorHex, COLORS_KEYS, HEADER_KEYS, NOTE_KEY, readHeader, ROW_WORDS } from './values.js';
 
@@ -51,7 +52,7 @@ const real = (t: IToken | undefined): t is IToken =>
 const BaseVisitor = parser.getBaseCstVisitorConstructor();
 
 class AstBuilder extends BaseVisitor {
-  readonly diagnostics: Diagnostic[] = [];
+  readonly diagnostics = new DiagnosticList();
   private readonly keyStrings = new Map<number, string>();
 
   constructor(private readonly ix: LineIndex) {
@@ -64,6 +65,10 @@ class AstBuilder extends BaseVisitor {
   }
 
   private error(range: SourceRange, message: string, hint?: string, id = 'syntax'): void {
+    if (this.diagnostics.full) {
+      this.diagnostics.dropped++;
+      return;
+    }
     this.diagnostics.push(
       hint === undefined ? { severity: 'error', id, message, range } : { severity: 'error', id, message, range, hint },
     );
@@ -211,6 +216,22 @@ class AstBuilder extends BaseVisitor {
     while (k < n) {
       const from = k;
       const c0 = image.charCodeAt(k);
+      if (c0 === 45) {
+        k++;
+        out.push({
+          type: 'skip',
+          range: {
+            line,
+            column: column + from,
+            endLine: line,
+            endColumn: column + k,
+            offset: t.startOffset + from,
+            endOffset: t.startOffset + k,
+          },
+        });
+        while (k < n && (image.charCodeAt(k) === 32 || image.charCodeAt(k) === 9)) k++;
+        continue;
+      }
       const mark = c0 === 42 ? '*' : c0 === 43 ? '+' : '';
       if (mark !== '') k++;
       let lower = false;
@@ -354,7 +375,11 @@ function startOf(el: IToken | CstNode): number {
 }
 
 /** Turn the CST into the AST, placing each line and attaching comments. */
-export function toAst(cst: CstNode, ix: LineIndex, commentTokens: IToken[]): Result<PatternAst> {
+export function toAst(
+  cst: CstNode,
+  ix: LineIndex,
+  commentTokens: IToken[],
+): { value: PatternAst; diagnostics: DiagnosticList } {
   const builder = new AstBuilder(ix);
   const lines = builder.visit(cst) as Line[];
   const diagnostics = builder.diagnostics;
@@ -366,7 +391,7 @@ export function toAst(cst: CstNode, ix: LineIndex, commentTokens: IToken[]): Res
   return { value: placed, diagnostics };
 }
 
-function placeLines(lines: Line[], comments: Comment[], ix: LineIndex, diagnostics: Diagnostic[]): PatternAst {
+function placeLines(lines: Line[], comments: Comment[], ix: LineIndex, diagnostics: DiagnosticList): PatternAst {
   const entries: HeaderEntry[] = [];
   const colors: ColorDef[] = [];
   const notes: NoteNode[] = [];
@@ -443,10 +468,10 @@ function colorLine(
   line: ColorLine,
   inBlock: boolean,
   ix: LineIndex,
-  diagnostics: Diagnostic[],
+  diagnostics: DiagnosticList,
 ): Omit<ColorDef, 'leadingComments'> | undefined {
   const push = (range: SourceRange, message: string, hint: string, id = 'syntax'): void => {
-    diagnostics.push({ severity: 'error', id, message, range, hint });
+    diagnostics.add(() => ({ severity: 'error', id, message, range, hint }));
   };
   const lower = line.word.toLowerCase();
   const known = [...HEADER_KEYS, NOTE_KEY, ...COLORS_KEYS];

@@ -72,31 +72,46 @@ export const BodyToken = createToken({ name: 'BodyToken', pattern: Lexer.NA });
 export const Times = createToken({ name: 'Times', pattern: /[x×][ \t]*\d+|X\d+/, categories: BodyToken });
 
 /**
- * A run of units separated by spaces (`*AAAA BA +AAA`) as one token; the AST
+ * A run of units and skips separated by spaces (`- *AAAA BA +AAA`) as one token; the AST
  * step splits it. A row of a thousand plain units is then a handful of
  * tokens, which keeps lexing and parsing a large file cheap. Lower-case keys
- * are lexed too, so the AST step can say "colour keys are capital letters";
- * a word followed by a digit is left for `Times` (`x3`).
+ * are lexed too, so the AST step can say "colour keys are capital letters".
+ * A run stops before a repeat count (`AB x3` leaves `x3` for `Times`). Nothing
+ * in the pattern looks behind a run of letters, so a long line of letters is
+ * matched in one pass, never re-tried letter by letter.
  */
 export const Units = createToken({
   name: 'Units',
-  pattern: /(?:[*+][A-Za-z]*|[A-Za-z]+)(?![\w])(?:[ \t]+(?:[*+][A-Za-z]*|[A-Za-z]+)(?![\w]))*[ \t]*/,
+  pattern: /(?:[*+][A-Za-z]*|[A-Za-z]+|-)(?:[ \t]+(?![x×][ \t]*\d|X\d|-[ \t]*\d)(?:[*+][A-Za-z]*|[A-Za-z]+|-))*[ \t]*/,
   categories: BodyToken,
 });
 
-/** A skip, or the dash of a row range `rows 2-5`. */
-export const Dash = createToken({ name: 'Dash', pattern: /-/, categories: BodyToken });
+/** The dash of a row range `rows 2-5` (before `Units`, which takes skips). */
+export const Dash = createToken({ name: 'Dash', pattern: /-(?=[ \t]*\d)/, categories: BodyToken });
 
 export const RowNumber = createToken({ name: 'RowNumber', pattern: /\d+/, categories: BodyToken });
 export const Colon = createToken({ name: 'Colon', pattern: /:/, categories: BodyToken });
 export const LParen = createToken({ name: 'LParen', pattern: /\(/ });
 export const RParen = createToken({ name: 'RParen', pattern: /\)/ });
 
+/**
+ * Any other single character, in every mode, collected apart like comments.
+ * The lexer then never fails, and so never falls back to trying every
+ * pattern at every following character: a line of stray characters costs
+ * no more than a line of units. `lexer.ts` reports them.
+ */
+export const Stray = createToken({
+  name: 'Stray',
+  // eslint-disable-next-line no-control-regex -- every character but the blanks, as a positive range
+  pattern: /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u0021-\uffff]/,
+  group: 'strays',
+});
+
 export const lexerDefinition: { modes: Record<string, TokenType[]>; defaultMode: string } = {
   modes: {
-    [LINE]: [Gap, Comment, HeaderKey, RowStart, ColorKey],
-    [ROW]: [Continuation, LineEnd, Blank, Comment, Times, Units, Dash, RowNumber, Colon, LParen, RParen],
-    [TEXT]: [LineEnd, Text],
+    [LINE]: [Gap, Comment, HeaderKey, RowStart, ColorKey, Stray],
+    [ROW]: [Continuation, LineEnd, Blank, Comment, Times, Dash, Units, RowNumber, Colon, LParen, RParen, Stray],
+    [TEXT]: [LineEnd, Text, Stray],
   },
   defaultMode: LINE,
 };
@@ -119,4 +134,5 @@ export const allTokens: TokenType[] = [
   Colon,
   LParen,
   RParen,
+  Stray,
 ];

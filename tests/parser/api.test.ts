@@ -1,6 +1,6 @@
 /** The public API: limits, bytes, expansion, and the order of diagnostics. */
 import { describe, expect, test } from 'vitest';
-import { expandRow, MAX_BYTES, parse, parseBytes, UNIT_LIMIT } from '../../parser/index.js';
+import { expandRow, MAX_BYTES, MAX_DIAGNOSTICS, parse, parseBytes, UNIT_LIMIT } from '../../parser/index.js';
 import { sortDiagnostics } from '../../shared/diagnostic.js';
 
 const utf8 = (s: string): Uint8Array => new TextEncoder().encode(s);
@@ -59,6 +59,23 @@ describe('parse', () => {
     const r = parse(`${head}row 1: AAAA BBB\nrow 2: AA ) BB\nrwo 3: AB\nrow 4: (AB\n`);
     expect(r.value.rows.map((x) => x.from)).toEqual([1, 2, 3, 4]);
     expect(r.value.rows[1]!.items.map((i) => (i.type === 'unit' ? i.keys : i.type))).toEqual(['AA', 'BB']);
+  });
+});
+
+describe('many problems', () => {
+  test('past MAX_DIAGNOSTICS the first are listed, in order, and one note counts the rest', () => {
+    // Each line is a colour line outside the colour block with no colour: two errors and a warning.
+    const r = parse(`${head}row 1: AAAA BBB\n${'C\n'.repeat(600)}`);
+    expect(r.diagnostics).toHaveLength(MAX_DIAGNOSTICS + 1);
+    const note = r.diagnostics[r.diagnostics.length - 1]!;
+    expect(note).toMatchObject({ severity: 'info', id: 'too-many-problems' });
+    expect(note.message).toBe('800 more problems from here on are not listed');
+    expect(r.diagnostics).toEqual(sortDiagnostics(r.diagnostics));
+  });
+
+  test('stray characters next to each other are one problem', () => {
+    const r = parse(`${head}row 1: AAAA %%% BBB\n`);
+    expect(r.diagnostics.map((d) => [d.id, d.range.column, d.range.endColumn])).toEqual([['syntax', 13, 16]]);
   });
 });
 
