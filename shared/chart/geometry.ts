@@ -54,29 +54,26 @@ export function cornerJunction(model: Model, unit: Unit, corner: Corner): number
 }
 
 /**
- * The cell outline in model coordinates. In a round, cells are not squares,
- * so the four corner junctions give the outline when every place is built;
+ * The cell outline on the page. In a round, cells are not squares, so the
+ * four corner junctions give the outline when every place is built;
  * elsewhere (and for a failed unit) it is the unit square turned by the
  * unit's angle, which also keeps a tube's closing unit from reaching across
  * the unrolled chart to its far bead at the seam.
  */
-export function cellOutline(model: Model, unit: Unit): Point[] {
-  const found = model.layout.kind === 'round' ? corners.map((c) => cornerJunction(model, unit, c)) : [];
-  if (found.length > 0 && found.every((j) => j !== null)) {
-    return found.map((j) => {
-      const junction = model.junctions[j as number]!;
-      return { x: junction.x, y: junction.y };
-    });
+export function cellOutline(model: Model, unit: Unit, t: PageTransform): Point[] {
+  if (model.layout.kind === 'round') {
+    const found = corners.map((c) => cornerJunction(model, unit, c));
+    if (found.every((j) => j !== null)) return found.map((j) => toPage(t, model.junctions[j as number]!));
   }
   const rad = (unit.angle * Math.PI) / 180;
-  const cos = Math.cos(rad);
-  const sin = Math.sin(rad);
+  const cos = Math.cos(rad) * 0.5;
+  const sin = Math.sin(rad) * 0.5;
   return [
-    [0.5, -0.5],
-    [0.5, 0.5],
-    [-0.5, 0.5],
-    [-0.5, -0.5],
-  ].map(([dx, dy]) => ({ x: unit.x + dx! * cos - dy! * sin, y: unit.y + dx! * sin + dy! * cos }));
+    toPage(t, { x: unit.x + cos + sin, y: unit.y + sin - cos }),
+    toPage(t, { x: unit.x + cos - sin, y: unit.y + sin + cos }),
+    toPage(t, { x: unit.x - cos - sin, y: unit.y - sin + cos }),
+    toPage(t, { x: unit.x - cos + sin, y: unit.y - sin - cos }),
+  ];
 }
 
 export const unitVector = (from: Point, to: Point): Point => {

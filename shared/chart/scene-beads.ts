@@ -29,10 +29,7 @@ export function cells(model: Model, t: PageTransform, theme: Theme): PathPrim[] 
     kind: 'path',
     id: `ff-cell-${unit.id}`,
     role: 'cell',
-    d: pointPath(
-      cellOutline(model, unit).map((p) => toPage(t, p)),
-      true,
-    ),
+    d: pointPath(cellOutline(model, unit, t), true),
     fill: theme.cell,
     stroke: null,
     strokeWidth: 0,
@@ -133,7 +130,7 @@ export function failures(model: Model, t: PageTransform, theme: Theme): PathPrim
   return model.units
     .filter((unit) => unit.failed)
     .map((unit) => {
-      const [a, b, c, d] = cellOutline(model, unit).map((p) => toPage(t, p));
+      const [a, b, c, d] = cellOutline(model, unit, t);
       return {
         kind: 'path',
         id: `ff-failed-${unit.id}`,
