@@ -4,6 +4,7 @@ import { parse } from '../../parser/index.js';
 import { formatDiagnostic, formatDiagnostics } from '../../shared/format-diagnostics.js';
 import type { Diagnostic } from '../../shared/diagnostic.js';
 
+const ESC = String.fromCharCode(27);
 const text = 'title: T\ncolors:\n  A #000\nrow 1: AAAA\nrow 2: AAA QA\n';
 const [unknown] = parse(text).diagnostics;
 
@@ -21,9 +22,9 @@ describe('formatDiagnostic', () => {
   });
 
   test('no ANSI escapes unless colour is asked for', () => {
-    expect(formatDiagnostic(unknown!, text, 'p.ffp', { color: false })).not.toMatch(/\u001b\[/);
+    expect(formatDiagnostic(unknown!, text, 'p.ffp', { color: false })).not.toMatch(new RegExp(`${ESC}\\[`));
     const coloured = formatDiagnostic(unknown!, text, 'p.ffp', { color: true });
-    expect(coloured).toMatch(/\u001b\[1;31merror\[unknown-color\]/);
+    expect(coloured).toMatch(new RegExp(`${ESC}\\[1;31merror\\[unknown-color\\]`));
   });
 
   test('the caret sits under the right character after a tab and a non-BMP character', () => {
