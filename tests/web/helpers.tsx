@@ -5,10 +5,11 @@
  */
 import type { ReactElement } from 'react';
 import { render } from '@testing-library/react';
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
 import { createMemoryRouter, RouterProvider, type RouteObject } from 'react-router-dom';
 import { vi } from 'vitest';
 import { compile } from '../../shared/compile.js';
+import { createQueryClient } from '../../web/src/query-client.js';
 import type { Model } from '../../shared/model.js';
 
 export interface SentRequest {
@@ -49,7 +50,8 @@ export function mockApi(routes: Record<string, Handler | Answer>) {
 }
 
 export function renderRoutes(routes: RouteObject[] | ((client: QueryClient) => RouteObject[]), path: string) {
-  const client = new QueryClient({ defaultOptions: { queries: { retry: false }, mutations: { retry: false } } });
+  // The app's own client settings, so cache freshness and retries behave as they do in the browser.
+  const client = createQueryClient();
   const router = createMemoryRouter(typeof routes === 'function' ? routes(client) : routes, { initialEntries: [path] });
   const view = render(
     <QueryClientProvider client={client}>

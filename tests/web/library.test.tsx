@@ -1,0 +1,43 @@
+import { describe, expect, it } from 'vitest';
+import { screen, waitFor } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { routes } from '../../web/src/router.js';
+import { setSession } from '../../web/src/api/session.js';
+import { paramsFrom } from '../../web/src/pages/library.js';
+import { mockApi, renderRoutes } from './helpers.js';
+
+const tester = { id: 3, name: 'Odile Ferrant', email: 'tester@example.com', role: 'tester' as const };
+
+describe('library page', () => {
+  it('searches on the server a moment after typing stops, and keeps the search in the URL', async () => {
+    setSession({ token: 't', user: tester });
+    const api = mockApi({ 'GET /api/patterns': { json: { items: [], total: 0, page: 1, pageSize: 25 } } });
+    const { router } = renderRoutes(routes, '/library');
+    expect((await screen.findByText('When a designer shares a pattern with you, it appears here.')).tagName).toBe('P');
+    await userEvent.type(screen.getByLabelText('Search titles'), 'heron');
+    await waitFor(() => expect(router.state.location.search).toBe('?q=heron'));
+    await screen.findByText('No pattern title contains “heron”.');
+    const urls = api.sent.map((r) => r.url);
+    expect(urls[0]).toBe('/api/patterns?sort=updated&dir=desc&page=1&pageSize=25');
+    expect(urls.at(-1)).toBe('/api/patterns?q=heron&sort=updated&dir=desc&page=1&pageSize=25');
+    // One request for the finished word, not one per letter.
+    expect(urls.filter((u) => u.includes('q='))).toHaveLength(1);
+  });
+
+  it('reads sort and page from the URL, ignoring values the server would refuse', () => {
+    expect(paramsFrom(new URLSearchParams('sort=title&page=2'))).toMatchObject({ sort: 'title', dir: 'asc', page: 2 });
+    expect(paramsFrom(new URLSearchParams('sort=colour&dir=sideways&page=-3'))).toMatchObject({
+      sort: 'updated',
+      dir: 'desc',
+      page: 1,
+    });
+  });
+
+  it('shows a not-found page, not an error, for a pattern the reader may not see', async () => {
+    setSession({ token: 't', user: tester });
+    mockApi({ 'GET /api/patterns': { json: { items: [], total: 0, page: 1, pageSize: 25 } } });
+    renderRoutes(routes, '/patterns/99');
+    expect(await screen.findByRole('heading', { name: 'Not found' })).toBeTruthy();
+    expect(screen.getByText('There is nothing here, or it has not been shared with you.')).toBeTruthy();
+  });
+});
