@@ -5,7 +5,8 @@
 import { createHash } from 'node:crypto';
 import { z } from 'zod';
 import { renderChartSvg } from '../bin/render/chart-files.js';
-import { svgToPng, DEFAULT_DPI } from '../bin/render/png.js';
+import { sceneOptions } from '../bin/commands/chart.js';
+import { svgToPng } from '../bin/render/png.js';
 import { hasErrors } from '../shared/diagnostic.js';
 import { renderKitHtml, renderKitMarkdown } from '../shared/kit.js';
 import type { Model } from '../shared/model.js';
@@ -26,6 +27,8 @@ export interface Rendered {
 export type ViewKind = 'chart.svg' | 'chart.png' | 'tally' | 'steps' | 'kit' | 'model';
 
 const flag = z.enum(['1', 'true', '0', 'false']).transform((v) => v === '1' || v === 'true');
+/** `fourfold chart --png` draws at 300 dpi unless told otherwise (bin/args.ts). */
+const CLI_DPI = 300;
 const chartQuery = z.object({
   theme: z.enum(['light', 'dark', 'print']).optional(),
   numbers: flag.optional(),
@@ -91,12 +94,13 @@ export async function renderView(
       return json(model);
     case 'chart.svg':
     case 'chart.png': {
-      const { dpi, ...options } = check(chartQuery, query);
-      const { svg, diagnostics } = await renderChartSvg(model, options);
+      const { dpi, ...given } = check(chartQuery, query);
+      // The CLI's own option mapping and defaults, so a download is the bytes `fourfold chart` writes.
+      const { svg, diagnostics } = await renderChartSvg(model, sceneOptions(given));
       if (hasErrors(diagnostics)) throw new HttpError(400, 'invalid-input', diagnostics[0]!.message, diagnostics);
       return kind === 'chart.svg'
         ? { type: 'image/svg+xml; charset=utf-8', body: svg }
-        : { type: 'image/png', body: await svgToPng(svg, dpi ?? DEFAULT_DPI) };
+        : { type: 'image/png', body: await svgToPng(svg, dpi ?? CLI_DPI) };
     }
     case 'tally': {
       needsClean(model);
