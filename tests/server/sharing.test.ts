@@ -151,6 +151,10 @@ describe('sign-in and passwords', () => {
     const mails = await outbox();
     expect(mails.length).toBe(before + 1);
     const token = linkIn(mails[0]!.text).searchParams.get('token')!;
+    const link = (await h.db.models.PasswordToken.findOne({ order: [['id', 'DESC']] }))!;
+    const lifetime = link.expiresAt.getTime() - link.createdAt.getTime();
+    expect(lifetime).toBeGreaterThan(0);
+    expect(lifetime).toBeLessThan(60 * 60 * 1000);
     await request(h.app).post('/api/auth/reset').send({ token, password: 'tester-new-pass' }).expect(200);
     await login(h, 'tester@example.com', 'tester-new-pass');
   });
