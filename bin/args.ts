@@ -133,7 +133,7 @@ function define(program: Command, done: (cmd: ParsedCommand) => void): void {
     .argument('<file>', "pattern file ('-' reads standard input)")
     .option('-o, --output <file>', 'write the chart to this file instead of standard output')
     .option('--png', 'write PNG instead of SVG (no browser needed)')
-    .addOption(new Option('--dpi <dpi>', 'pixels per inch for --png').argParser(integerIn(24, 2400)).default(300))
+    .addOption(new Option('--dpi <dpi>', 'pixels per inch for --png').argParser(integerIn(24, 2400)).default(192))
     .addOption(
       new Option('--scale <scale>', "'mm' draws at true size for printing").choices(['screen', 'mm']).default('screen'),
     )

@@ -64,7 +64,7 @@ describe('parseArgs: each command', () => {
   });
 
   it('chart: output, png, dpi, scale, numbers, thread, theme, strict', () => {
-    expect(ok('chart', 'a.ffp').options).toEqual({ dpi: 300, scale: 'screen', theme: 'light', format: 'svg' });
+    expect(ok('chart', 'a.ffp').options).toEqual({ dpi: 192, scale: 'screen', theme: 'light', format: 'svg' });
     const c = ok(
       'chart',
       'a.ffp',
