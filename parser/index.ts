@@ -68,6 +68,7 @@ function parseText(input: string): Result<PatternAst> {
       id: 'syntax',
       message: `'${e.token.image}' was not expected here`,
       range: ix.range(e.token.startOffset, e.token.startOffset + e.token.image.length),
+      hint: 'check the line against the notation: header lines, colour lines under colors:, then rows',
     })),
     ...ast.diagnostics,
     ...checked,
