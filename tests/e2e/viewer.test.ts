@@ -58,6 +58,24 @@ async function signIn(p: Page, email: string, password = PASSWORD) {
 
 const placeText = (p: Page) => p.getByTestId('stepper-place').textContent();
 
+/** The page's cumulative layout shift so far (shifts right after input do not count). */
+const layoutShift = (p: Page) =>
+  p.evaluate(
+    () =>
+      new Promise<number>((resolve) => {
+        type Shift = { value: number; hadRecentInput: boolean };
+        // Typed for Node, whose entry types do not include the browser's 'layout-shift'.
+        const init = { type: 'layout-shift' as 'mark', buffered: true };
+        new PerformanceObserver((list) =>
+          resolve(
+            (list.getEntries() as unknown as Shift[]).reduce((sum, e) => sum + (e.hadRecentInput ? 0 : e.value), 0),
+          ),
+        ).observe(init);
+        // With no shift at all there is no entry, and the observer never calls back.
+        setTimeout(() => resolve(0), 500);
+      }),
+  );
+
 describe('designer and tester in the browser', () => {
   it('signs in, uploads a pattern, and sees a chart with as many beads as its tally', async () => {
     await signIn(page, 'designer@example.com');
@@ -78,6 +96,30 @@ describe('designer and tester in the browser', () => {
     await page.getByTestId('chart').locator('[data-bead]').first().hover();
     expect(await page.getByTestId('bead-tooltip').textContent()).toMatch(/Row \d+, unit \d+, (base|far|top|near)/);
     await shot(page, 'pattern');
+  });
+
+  it('loads the pattern page without moving what is already on screen', async () => {
+    await page.reload();
+    await page.getByTestId('chart').locator('[data-bead]').first().waitFor();
+    await page.getByTestId('tally-beads').waitFor();
+    // Cumulative layout shift of the whole load; 0.1 is the "good" limit of web.dev's Core Web Vitals (from memory).
+    expect(await layoutShift(page)).toBeLessThan(0.1);
+    // The measure itself works: pushing the page down by a block is a shift it sees.
+    await page.evaluate(() => {
+      const doc = (
+        globalThis as unknown as {
+          document: {
+            querySelector(s: string): { prepend(n: unknown): void };
+            createElement(t: string): { style: { height: string } };
+          };
+        }
+      ).document;
+      const block = doc.createElement('div');
+      block.style.height = '300px';
+      doc.querySelector('main')!.prepend(block);
+    });
+    await expect.poll(() => layoutShift(page)).toBeGreaterThan(0);
+    await page.reload();
   });
 
   it('steps through a row with the arrow keys and finds the place again after a reload', async () => {
