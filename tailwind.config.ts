@@ -4,7 +4,7 @@ import type { Config } from 'tailwindcss';
 // this file holds the design tokens that both the CSS and the tests read.
 export default {
   content: ['./web/index.html', './web/src/**/*.{ts,tsx}'],
-  darkMode: 'class',
+  // Dark mode is the `dark` variant in web/src/styles.css: the .dark class the theme switch sets on <html>.
   theme: {
     extend: {
       fontFamily: {
