@@ -19,7 +19,6 @@ import {
   RowNumber,
   RowStart,
   RParen,
-  Text,
   Times,
 } from './tokens.js';
 
@@ -38,8 +37,6 @@ class PatternParser extends CstParser {
   /** `key: text`, `note: text`, `colors:` or a colour line `A  #2e6f8e  teal`. */
   private textLine = this.RULE('textLine', () => {
     this.OR([{ ALT: () => this.CONSUME(HeaderKey) }, { ALT: () => this.CONSUME(ColorKey) }]);
-    this.OPTION(() => this.CONSUME(Text));
-    this.CONSUME(LineEnd);
   });
 
   /**

@@ -5,7 +5,7 @@
 import { createTokenInstance, Lexer, type IToken } from 'chevrotain';
 import type { Diagnostic } from '../shared/diagnostic.js';
 import type { LineIndex } from './positions.js';
-import { lexerDefinition, LineEnd } from './tokens.js';
+import { ColorKey, HeaderKey, lexerDefinition, LineEnd } from './tokens.js';
 
 const lexer = new Lexer(lexerDefinition, { positionTracking: 'onlyOffset', ensureOptimizations: true });
 
@@ -23,8 +23,9 @@ const ROW_LINE = /^[ \t]*(?:rows?|rounds?|[A-Za-z]{2,}[ \t]*\d)/i;
 export function lex(text: string, index: LineIndex): Lexed {
   const result = lexer.tokenize(text);
   const tokens = result.tokens;
-  // Every line rule ends with a LineEnd; a file without a final newline gets an empty one.
-  if (tokens.length > 0 && tokens[tokens.length - 1]!.tokenType !== LineEnd) {
+  // A row ends with a LineEnd; a file that ends inside a row without a final newline gets an empty one.
+  const last = tokens[tokens.length - 1];
+  if (last && last.tokenType !== LineEnd && last.tokenType !== HeaderKey && last.tokenType !== ColorKey) {
     tokens.push(createTokenInstance(LineEnd, '', text.length, text.length - 1, NaN, NaN, NaN, NaN));
   }
   const spans = strayRuns(result.groups.strays ?? []);

@@ -103,7 +103,11 @@ export function guardNesting(tokens: IToken[], ix: LineIndex): { tokens: IToken[
   let tooDeep: IToken | undefined;
   tokens.forEach((t, i) => {
     const name = t.tokenType.name;
-    if (name === 'LParen' && ++depth > MAX_NESTING && !tooDeep) tooDeep = t;
+    // Lines before a row (header, notes, colours) are single tokens: keep them as they come.
+    if (name === 'RowStart') {
+      kept?.push(...tokens.slice(lineStart, i));
+      lineStart = i;
+    } else if (name === 'LParen' && ++depth > MAX_NESTING && !tooDeep) tooDeep = t;
     else if (name === 'RParen') depth = Math.max(0, depth - 1);
     else if (name === 'LineEnd') {
       if (tooDeep) {
@@ -121,6 +125,7 @@ export function guardNesting(tokens: IToken[], ix: LineIndex): { tokens: IToken[
       tooDeep = undefined;
     }
   });
+  kept?.push(...tokens.slice(lineStart));
   return { tokens: kept ?? tokens, diagnostics };
 }
 

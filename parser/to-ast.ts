@@ -66,21 +66,22 @@ class AstBuilder extends BaseVisitor {
   textLine(ctx: Children): Line | undefined {
     const head = tokens(ctx, 'HeaderKey')[0] ?? tokens(ctx, 'ColorKey')[0];
     if (!real(head)) return undefined;
-    const textTok = tokens(ctx, 'Text')[0];
-    const raw = real(textTok) ? textTok.image : '';
-    const textOffset = real(textTok) ? textTok.startOffset : endOf(head);
-    const lineEnd = textOffset + raw.length;
-    const range = this.ix.range(head.startOffset, lineEnd - (raw.length - raw.trimEnd().length));
-    if (head.tokenType.name === 'ColorKey') {
-      return { kind: 'color', word: head.image, wordRange: this.range(head), text: raw, textOffset, range };
-    }
-    const key = head.image.slice(0, -1).trim();
+    const image = head.image;
+    const word = /^[A-Za-z][\w-]*/.exec(image)![0];
+    const isKey = head.tokenType.name === 'HeaderKey';
+    // The text after the word (a colour line) or after the ':' (a header line).
+    const textAt = isKey ? image.indexOf(':', word.length) + 1 : word.length;
+    const raw = image.slice(textAt);
+    const textOffset = head.startOffset + textAt;
+    const range = this.ix.range(head.startOffset, textOffset + raw.trimEnd().length);
+    const wordRange = this.ix.range(head.startOffset, head.startOffset + word.length);
+    if (!isKey) return { kind: 'color', word, wordRange, text: raw, textOffset, range };
     const lead = raw.length - raw.trimStart().length;
     const value = raw.trim();
     return {
       kind: 'key',
-      key: key.toLowerCase(),
-      keyRange: this.ix.range(head.startOffset, head.startOffset + key.length),
+      key: word.toLowerCase(),
+      keyRange: wordRange,
       value,
       valueRange: this.ix.range(textOffset + lead, textOffset + lead + value.length),
       range,

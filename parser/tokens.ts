@@ -1,16 +1,15 @@
 /**
  * Token types of the notation. The file is line-oriented, so the lexer runs in
- * three modes: `line` at the start of each line, `row` inside a row line (and
- * its continuation lines), `text` for the free text after a header key, a
- * note or a colour key. Keeping the modes in the lexer keeps the grammar
- * small: it only ever sees whole, already classified lines.
+ * two modes: `line` at the start of each line, where a header, note or colour
+ * line is one token, and `row` inside a row line (and its continuation
+ * lines). Keeping the modes in the lexer keeps the grammar small: it only ever
+ * sees whole, already classified lines.
  */
 import { createToken, Lexer, type TokenType } from 'chevrotain';
 
 const LINE = 'line';
 const ROW = 'row';
-const TEXT = 'text';
-export const modes = { LINE, ROW, TEXT } as const;
+export const modes = { LINE, ROW } as const;
 
 /** Blank space and empty lines between lines: nothing in the grammar depends on them. */
 export const Gap = createToken({ name: 'Gap', pattern: /[ \t\r\n]+/, group: Lexer.SKIPPED, line_breaks: true });
@@ -26,8 +25,16 @@ export const Comment = createToken({
   group: 'comments',
 });
 
-/** `title:`, `note:`, `colors:` and any other `word:` at the start of a line. */
-export const HeaderKey = createToken({ name: 'HeaderKey', pattern: /[A-Za-z][\w-]*[ \t]*:/, push_mode: TEXT });
+/**
+ * A whole `key: value` line: `title: Kestrel Fan`, `note: ...`, `colors:`.
+ * One token for the line keeps the token count of a file with many notes low;
+ * the AST step splits key and value.
+ */
+export const HeaderKey = createToken({
+  name: 'HeaderKey',
+  // eslint-disable-next-line no-control-regex -- every character but the line break, as a positive range
+  pattern: /[A-Za-z][\w-]*[ \t]*:[\u0000-\u0009\u000b-\uffff]*/,
+});
 
 /**
  * `row`, `rows`, `round`, `rounds`, or any other word of two or more letters
@@ -40,21 +47,14 @@ export const RowStart = createToken({
   push_mode: ROW,
 });
 
-/** Any other word at the start of a line: a colour line (`A  #F4F1EA  chalk`). */
-export const ColorKey = createToken({ name: 'ColorKey', pattern: /[A-Za-z][\w-]*/, push_mode: TEXT });
-
-/**
- * The rest of a line after a header key or colour key. Written as a positive
- * character range rather than [^\r\n] so Chevrotain keeps its first-character
- * optimisation.
- */
-export const Text = createToken({
-  name: 'Text',
-  // eslint-disable-next-line no-control-regex -- every character but the line breaks, as a positive range
-  pattern: /[\u0000-\u0009\u000b\u000c\u000e-\uffff]+(?:\r(?!\n)[\u0000-\u0009\u000b\u000c\u000e-\uffff]*)*/,
+/** Any other line that starts with a word: a colour line (`A  #F4F1EA  chalk`), as one token. */
+export const ColorKey = createToken({
+  name: 'ColorKey',
+  // eslint-disable-next-line no-control-regex -- every character but the line break, as a positive range
+  pattern: /[A-Za-z][\w-]*[\u0000-\u0009\u000b-\uffff]*/,
 });
 
-/** Ends a row or text line and returns to the `line` mode. */
+/** Ends a row line and returns to the `line` mode. */
 export const LineEnd = createToken({ name: 'LineEnd', pattern: /\r?\n/, line_breaks: true, pop_mode: true });
 
 /** A line break followed by an indented line that starts like units: the row goes on. */
@@ -111,7 +111,6 @@ export const lexerDefinition: { modes: Record<string, TokenType[]>; defaultMode:
   modes: {
     [LINE]: [Gap, Comment, HeaderKey, RowStart, ColorKey, Stray],
     [ROW]: [Continuation, LineEnd, Blank, Comment, Times, Dash, Units, RowNumber, Colon, LParen, RParen, Stray],
-    [TEXT]: [LineEnd, Text, Stray],
   },
   defaultMode: LINE,
 };
@@ -123,7 +122,6 @@ export const allTokens: TokenType[] = [
   HeaderKey,
   RowStart,
   ColorKey,
-  Text,
   LineEnd,
   Continuation,
   BodyToken,

@@ -79,6 +79,18 @@ describe('many problems', () => {
   });
 });
 
+describe('nesting', () => {
+  test('a row nested too deep is left out, and the lines around it are kept', () => {
+    const deep = `${'('.repeat(20)}AA${')x2'.repeat(20)}`;
+    const r = parse(`${head}row 1: ${deep}\nnote: after\nrow 1: AAAA BBB\nnote: last`);
+    expect(r.diagnostics.map((d) => d.id)).toEqual(['too-large']);
+    expect(r.value.header.title).toBe('T');
+    expect(r.value.colors).toHaveLength(2);
+    expect(r.value.rows.map((x) => x.notes.map((n) => n.text))).toEqual([['last']]);
+    expect(r.value.notes.map((n) => n.text)).toEqual(['after']);
+  });
+});
+
 describe('inputs found by fuzzing', () => {
   test.each([['a lone carriage return in a colour line', 'r r r\rr']])('%s', (_what, text) => {
     expect(parse(text).diagnostics.map((d) => d.id)).not.toContain('internal');
