@@ -6,7 +6,8 @@ import { createHash } from 'node:crypto';
 import { z } from 'zod';
 import { renderChartSvg } from '../bin/render/chart-files.js';
 import { sceneOptions } from '../bin/commands/chart.js';
-import { svgToPng } from '../bin/render/png.js';
+// The CLI's --dpi default is this same constant.
+import { DEFAULT_DPI, svgToPng } from '../bin/render/png.js';
 import { hasErrors } from '../shared/diagnostic.js';
 import { renderKitHtml, renderKitMarkdown } from '../shared/kit.js';
 import type { Model } from '../shared/model.js';
@@ -27,8 +28,6 @@ export interface Rendered {
 export type ViewKind = 'chart.svg' | 'chart.png' | 'tally' | 'steps' | 'kit' | 'model';
 
 const flag = z.enum(['1', 'true', '0', 'false']).transform((v) => v === '1' || v === 'true');
-/** `fourfold chart --png` draws at 300 dpi unless told otherwise (bin/args.ts). */
-const CLI_DPI = 300;
 const chartQuery = z.object({
   theme: z.enum(['light', 'dark', 'print']).optional(),
   numbers: flag.optional(),
@@ -100,7 +99,7 @@ export async function renderView(
       if (hasErrors(diagnostics)) throw new HttpError(400, 'invalid-input', diagnostics[0]!.message, diagnostics);
       return kind === 'chart.svg'
         ? { type: 'image/svg+xml; charset=utf-8', body: svg }
-        : { type: 'image/png', body: await svgToPng(svg, dpi ?? CLI_DPI) };
+        : { type: 'image/png', body: await svgToPng(svg, dpi ?? DEFAULT_DPI) };
     }
     case 'tally': {
       needsClean(model);

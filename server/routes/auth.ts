@@ -1,4 +1,4 @@
-import { Router } from 'express';
+import { Router, type RequestHandler } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import { z } from 'zod';
 import type { AppDeps } from '../context.js';
@@ -13,19 +13,27 @@ const loginBody = z.object({ email, password: z.string().min(1).max(200) });
 export function authRoutes(deps: AppDeps): Router {
   const { models } = deps.db;
   const router = Router();
-  const signInLimit = rateLimit({
+  const accountLimit = deps.loginLimit ?? 10;
+  const tooMany: Parameters<typeof rateLimit>[0] = {
     windowMs: 60_000,
-    limit: deps.loginLimit ?? 10,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
-    // Per address, so guessing one account's password is slow from anywhere.
+    handler: (_req, _res, next) =>
+      next(new HttpError(429, 'too-many-requests', 'Too many sign-in attempts; wait a minute and try again.')),
+  };
+  // Per address, so guessing one account's password is slow from anywhere.
+  const perAccount = rateLimit({
+    ...tooMany,
+    limit: accountLimit,
     keyGenerator: (req) =>
       `login:${String((req.body as { email?: unknown } | undefined)?.email ?? '')
         .trim()
         .toLowerCase()}`,
-    handler: (_req, _res, next) =>
-      next(new HttpError(429, 'too-many-requests', 'Too many sign-in attempts; wait a minute and try again.')),
   });
+  // Per client address too, so trying one password on many accounts is slow as well.
+  const perClient = rateLimit({ ...tooMany, limit: accountLimit * 10 });
+  const signInLimit: RequestHandler = (req, res, next) =>
+    perAccount(req, res, (error?: unknown) => (error ? next(error) : perClient(req, res, next)));
 
   router.post('/login', signInLimit, async (req, res) => {
     const body = check(loginBody, req.body);

@@ -190,6 +190,17 @@ describe('sign-in and passwords', () => {
       const limited = await attempt();
       expect(limited.status).toBe(429);
       expect(limited.body.error.code).toBe('too-many-requests');
+      // Other addresses are still let through, until the client's own limit (10 times the per-address one) is reached.
+      const spray = (i: number) =>
+        request(strict.app)
+          .post('/api/auth/login')
+          .send({ email: `spray-${i}@example.com`, password: 'guess-guess' });
+      const statuses: number[] = [];
+      for (let i = 0; i < 30; i++) statuses.push((await spray(i)).status);
+      expect(statuses[0]).toBe(401);
+      expect(statuses.at(-1)).toBe(429);
+      // The client may make 10 x 3 = 30 tries a minute: 3 went to the designer (the 4th was stopped per address), 27 here.
+      expect(statuses.filter((s) => s === 401)).toHaveLength(27);
     } finally {
       await strict.close();
     }
