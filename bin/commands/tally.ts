@@ -55,7 +55,10 @@ export async function loadTally(
   return { model, tally: result.value, options };
 }
 
-const width = (s: string): number => [...s].length;
+// eslint-disable-next-line no-control-regex -- ANSI escapes are exactly what is matched
+const ANSI_ESCAPE = /\x1b\[[0-9;]*m/g;
+/** Characters a terminal shows: a swatch's colour escapes take no room. */
+const width = (s: string): number => [...s.replace(ANSI_ESCAPE, '')].length;
 const padEnd = (s: string, n: number): string => s + ' '.repeat(Math.max(0, n - width(s)));
 const padStart = (s: string, n: number): string => ' '.repeat(Math.max(0, n - width(s))) + s;
 

@@ -86,6 +86,17 @@ describe('tally table', () => {
     expect(renderTallyTable(t, options, true)).toContain('\x1b[48;2;46;111;142m');
   });
 
+  it('lines the columns up on a colour terminal as without colour: escapes take no room', () => {
+    const esc = String.fromCharCode(27);
+    const shown = (s: string): string => s.replace(new RegExp(`${esc}\\[[0-9;]*m`, 'g'), '');
+    const colourLines = renderTallyTable(t, options, true).split('\n').slice(3, 3 + 1 + t.colors.length);
+    const plainLines = renderTallyTable(t, options, false).split('\n').slice(3, 3 + 1 + t.colors.length);
+    // The swatch is four cells wide plus two of gap, so every line is six wider, header included.
+    colourLines.forEach((line, i) => {
+      expect(shown(line).length).toBe(plainLines[i]!.length + 6);
+    });
+  });
+
   it('reads the options args.ts hands over, with the design defaults', () => {
     expect(materialOptions({ name: 'kit', operands: [], options: {} })).toEqual({
       spare: 0.1,
