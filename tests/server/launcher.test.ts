@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import mariadb from 'mariadb';
 import { describe, expect, it } from 'vitest';
-import { launchMariadb, openDatabase } from '../../server/db/mariadb-launcher.js';
+import { launchMariadb, openDatabase, type Database } from '../../server/db/mariadb-launcher.js';
 
 async function query(url: string, sql: string): Promise<unknown[]> {
   const conn = await mariadb.createConnection(url);
@@ -20,23 +20,27 @@ async function query(url: string, sql: string): Promise<unknown[]> {
 describe('MariaDB launcher', () => {
   it('starts on loopback, keeps data across a restart, and stops', async () => {
     const dir = await mkdtemp(join(tmpdir(), 'fourfold-launcher-'));
+    // Every server started here is stopped, whatever fails (stop() is a no-op once stopped).
+    const started: Database[] = [];
+    const launch = async () => {
+      const db = await launchMariadb({ dataDir: dir });
+      started.push(db);
+      return db;
+    };
     try {
-      const first = await launchMariadb({ dataDir: dir });
+      const first = await launch();
       expect(new URL(first.url).hostname).toBe('127.0.0.1');
       await query(first.url, 'CREATE TABLE kept (n INT)');
       await query(first.url, 'INSERT INTO kept VALUES (42)');
       expect((await stat(join(dir, 'app-password'))).mode & 0o777).toBe(0o600);
       await first.stop();
       await expect(query(first.url, 'SELECT 1')).rejects.toThrow();
-      const second = await launchMariadb({ dataDir: dir });
-      try {
-        expect(await query(second.url, 'SELECT n FROM kept')).toEqual([{ n: 42 }]);
-        // The application user may use its own database only.
-        await expect(query(second.url, 'CREATE DATABASE elsewhere')).rejects.toThrow(/denied/i);
-      } finally {
-        await second.stop();
-      }
+      const second = await launch();
+      expect(await query(second.url, 'SELECT n FROM kept')).toEqual([{ n: 42 }]);
+      // The application user may use its own database only.
+      await expect(query(second.url, 'CREATE DATABASE elsewhere')).rejects.toThrow(/denied/i);
     } finally {
+      for (const db of started) await db.stop();
       await rm(dir, { recursive: true, force: true });
     }
   });
