@@ -40,8 +40,16 @@ async function isExecutable(path: string): Promise<boolean> {
   }
 }
 
-async function findProgram(name: string, env = process.env): Promise<string | null> {
-  const dirs = [...(env.PATH ?? '').split(delimiter).filter(Boolean), ...SEARCH_DIRS];
+/** Where to look and what we may do; the defaults are this process's, tests pass others. */
+export interface Host {
+  path: string;
+  dirs: readonly string[];
+  root: boolean;
+}
+const thisHost = (): Host => ({ path: process.env.PATH ?? '', dirs: SEARCH_DIRS, root: process.getuid?.() === 0 });
+
+async function findProgram(name: string, host: Host = thisHost()): Promise<string | null> {
+  const dirs = [...host.path.split(delimiter).filter(Boolean), ...host.dirs];
   for (const dir of dirs) {
     const candidate = join(dir, name);
     if (await isExecutable(candidate)) return candidate;
@@ -50,11 +58,11 @@ async function findProgram(name: string, env = process.env): Promise<string | nu
 }
 
 /** Finds mariadbd, installing Debian's packages when missing and we are root. */
-export async function findMariadbd(log: (line: string) => void = () => {}): Promise<string> {
-  const found = await findProgram('mariadbd');
+export async function findMariadbd(log: (line: string) => void = () => {}, host: Host = thisHost()): Promise<string> {
+  const found = await findProgram('mariadbd', host);
   if (found) return found;
   const command = `apt-get install -y ${APT_PACKAGES.join(' ')}`;
-  if (process.getuid?.() !== 0) {
+  if (!host.root) {
     throw new Error(
       `MariaDB is not installed. Install it with:\n  sudo ${command}\nor set DATABASE_URL to an existing server.`,
     );
@@ -64,7 +72,7 @@ export async function findMariadbd(log: (line: string) => void = () => {}): Prom
     env: { ...process.env, DEBIAN_FRONTEND: 'noninteractive' },
     maxBuffer: 64 * 1024 * 1024,
   });
-  const installed = await findProgram('mariadbd');
+  const installed = await findProgram('mariadbd', host);
   if (!installed) throw new Error(`'${command}' ran but mariadbd is still not found`);
   return installed;
 }

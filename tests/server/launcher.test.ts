@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import mariadb from 'mariadb';
 import { describe, expect, it } from 'vitest';
-import { launchMariadb, openDatabase, type Database } from '../../server/db/mariadb-launcher.js';
+import { findMariadbd, launchMariadb, openDatabase, type Database } from '../../server/db/mariadb-launcher.js';
 
 async function query(url: string, sql: string): Promise<unknown[]> {
   const conn = await mariadb.createConnection(url);
@@ -43,6 +43,13 @@ describe('MariaDB launcher', () => {
       for (const db of started) await db.stop();
       await rm(dir, { recursive: true, force: true });
     }
+  });
+
+  it('finds mariadbd on PATH or in /usr/sbin, and without it (not root) names the exact install command', async () => {
+    expect(await findMariadbd(() => {}, { path: '', dirs: ['/usr/sbin'], root: false })).toBe('/usr/sbin/mariadbd');
+    await expect(findMariadbd(() => {}, { path: '/nonexistent', dirs: [], root: false })).rejects.toThrow(
+      'sudo apt-get install -y mariadb-server-core mariadb-client-core',
+    );
   });
 
   it('starts nothing when DATABASE_URL is set', async () => {
