@@ -41,3 +41,28 @@ describe('library page', () => {
     expect(screen.getByText('There is nothing here, or it has not been shared with you.')).toBeTruthy();
   });
 });
+
+describe('an ended session', () => {
+  it('sends the reader to sign in, and back to the same page afterwards', async () => {
+    setSession({ token: 'revoked-elsewhere', user: tester });
+    mockApi({
+      'GET /api/patterns': { json: { items: [], total: 0, page: 1, pageSize: 25 } },
+      'GET /api/tokens': { status: 401, json: { error: { code: 'unauthenticated', message: 'Please sign in.' } } },
+    });
+    const { router } = renderRoutes(routes, '/library');
+    await userEvent.click(await screen.findByRole('link', { name: 'Account' }));
+    await screen.findByRole('heading', { name: 'Sign in' });
+    expect(router.state.location.search).toBe(`?next=${encodeURIComponent('/account')}`);
+  });
+
+  it('on a first load, says so where the page would be', async () => {
+    setSession({ token: 'expired', user: tester });
+    mockApi({
+      'GET /api/patterns': { status: 401, json: { error: { code: 'unauthenticated', message: 'Please sign in.' } } },
+    });
+    renderRoutes(routes, '/library');
+    expect((await screen.findByRole('link', { name: 'Sign in' })).getAttribute('href')).toBe(
+      `/sign-in?next=${encodeURIComponent('/library')}`,
+    );
+  });
+});

@@ -1,5 +1,6 @@
 /** The frame round every page: skip link, navigation by role, theme switch, sign-out, and a bar while a page loads. */
-import { Link, NavLink, Outlet, useNavigate, useNavigation } from 'react-router-dom';
+import { useEffect, useRef } from 'react';
+import { Link, NavLink, Outlet, useLocation, useNavigate, useNavigation } from 'react-router-dom';
 import { useSession } from '../api/session.js';
 import { useSignOut } from '../queries/auth.js';
 import { ThemeSwitch } from './theme-switch.js';
@@ -13,6 +14,15 @@ export function AppShell() {
   const signOut = useSignOut();
   const navigate = useNavigate();
   const role = session?.user.role;
+  const location = useLocation();
+  const hadSession = useRef(session !== null);
+  // A session the server stopped accepting (expired, revoked elsewhere) ends here: back to sign-in, then back to this page.
+  useEffect(() => {
+    if (hadSession.current && !session && location.pathname !== '/sign-in') {
+      navigate(`/sign-in?next=${encodeURIComponent(location.pathname + location.search)}`, { replace: true });
+    }
+    hadSession.current = session !== null;
+  }, [session, location.pathname, location.search, navigate]);
   return (
     <div className="flex min-h-screen flex-col">
       <a
