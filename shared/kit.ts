@@ -4,6 +4,7 @@
  * and the small-parts caution, so the sheet and `fourfold tally` agree.
  */
 import { SMALL_PARTS_CAUTION } from './caution.js';
+import { colorName } from './color-name.js';
 import { escapeHtml, htmlPage, md as mdCell, swatchHtml } from './steps-render.js';
 import type { Model } from './model.js';
 import { MM_PER_INCH, type Tally } from './tally.js';
@@ -71,7 +72,7 @@ function kitContent(model: Model, t: Tally, o: KitOptions): KitContent {
       .filter((c) => c.count > 0)
       .map((c) => ({
         key: c.key,
-        name: c.name,
+        name: colorName(c),
         hex: c.hex,
         count: String(c.count),
         grams: `${c.grams.low.toFixed(2)}-${c.grams.high.toFixed(2)} g`,

@@ -6,6 +6,7 @@
  */
 import type { Layout } from '../parser/ast.js';
 import type { Model, Place, RowInfo, Unit, UnitStep } from './model.js';
+import { colorName } from './color-name.js';
 
 export interface BeadRef {
   key: string;
@@ -184,7 +185,7 @@ function buildRow(ctx: Ctx, row: RowInfo, stepOf: Map<number, UnitStep>): StepRo
 export function buildSteps(model: Model): StepsDoc {
   const ctx: Ctx = {
     model,
-    names: new Map(model.palette.map((p) => [p.key, p.name])),
+    names: new Map(model.palette.map((p) => [p.key, colorName(p)])),
     rows: new Map(model.rows.map((r) => [r.row, r])),
   };
   const stepOf = new Map(model.steps.map((s) => [s.unit, s]));
@@ -194,7 +195,7 @@ export function buildSteps(model: Model): StepsDoc {
     ...(model.header.designer ? { designer: model.header.designer } : {}),
     beads: `${model.header.beads.size} ${model.header.beads.shape}`,
     layout: model.layout.kind,
-    colors: model.palette.map((p) => ({ key: p.key, name: p.name, hex: p.hex })),
+    colors: model.palette.map((p) => ({ key: p.key, name: colorName(p), hex: p.hex })),
     glossary: glossary(model),
     notes: model.header.notes,
     rows: model.rows.map((r) => buildRow(ctx, r, stepOf)),

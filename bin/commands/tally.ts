@@ -4,6 +4,7 @@
  * share: reading and compiling a pattern that must be error-free before any
  * material list is printed (a partial count would mislead a buyer).
  */
+import { colorName } from '../../shared/color-name.js';
 import { hasErrors } from '../../shared/diagnostic.js';
 import type { Model } from '../../shared/model.js';
 import {
@@ -85,7 +86,7 @@ export function renderTallyTable(t: Tally, o: MaterialOptions, color: boolean): 
   const colourRows = t.colors.map((c) => [
     c.key,
     ...(color ? [swatch(c.hex)] : []),
-    c.name,
+    colorName(c),
     String(c.count),
     `${c.grams.low.toFixed(2)}-${c.grams.high.toFixed(2)} g`,
     `${c.buyGrams} g`,

@@ -19,6 +19,14 @@ describe('kit sheet', () => {
     expect(out).toContain('7.6 x 3.8 mm (0.30 x 0.15 in)');
   });
 
+  it('names a colour written without a name by its CSS name', () => {
+    const m = stripModel();
+    // Source: CSS Color Module Level 4, section 6.1: crimson is #dc143c.
+    m.palette[0] = { ...m.palette[0]!, name: '', hex: '#dc143c' };
+    const tallied = tally(m, { beadsPerGram: { low: 100, high: 120 } }).value;
+    expect(renderKitMarkdown(m, tallied, options)).toContain('| A | #dc143c | crimson | 2 |');
+  });
+
   it('buys whole packs when a pack size is given', () => {
     const packed = tally(model, { beadsPerGram: { low: 100, high: 120 }, packGrams: 5 }).value;
     expect(renderKitMarkdown(model, packed, { ...options, packGrams: 5 })).toContain('1 x 5 g pack (5 g)');
