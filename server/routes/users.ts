@@ -55,6 +55,13 @@ export function userRoutes(deps: AppDeps): Router {
     res.status(201).json(toUser(user));
   });
 
+  router.get('/:id', async (req, res) => {
+    const { id } = check(idParams, req.params);
+    const user = await models.User.findByPk(id);
+    if (!user) throw notFound('No such user.');
+    res.json(toUser(user));
+  });
+
   router.patch('/:id', async (req, res) => {
     const { id } = check(idParams, req.params);
     const body = check(z.object({ name: name.optional(), email: email.optional(), role: role.optional() }), req.body);

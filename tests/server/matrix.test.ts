@@ -113,6 +113,7 @@ const ROWS: Row[] = [
     }),
     expect: adminOnly(201),
   },
+  { method: 'get', path: (f) => `/api/users/${f.testerId}`, expect: adminOnly(200) },
   {
     method: 'patch',
     path: (f) => `/api/users/${f.scratchUser}`,
