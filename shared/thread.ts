@@ -183,6 +183,7 @@ class Sim {
         id: 'no-passage',
         message: `${this.w.rows[u.rowIndex]!.word} ${u.row}, unit ${u.index}: the thread cannot reach this unit's start through ${PASSAGE_LIMIT} or fewer beads already in place`,
         range: u.range,
+        hint: 'check the marks and skips just before this unit: the thread can only travel through beads already in place',
       });
       start = { corner: (u.shared === 0 ? [0] : startCorners(u.shared, dir))[0]!, route: [] };
     } else if (this.prevUnit !== -1) {

@@ -84,7 +84,10 @@ export function beadCountDiagnostic(
   const message =
     `${where.word} ${row}, unit ${index}: ${sharesPhrase(shared, unit.mark, where)}, so it takes ${expected} new bead${expected === 1 ? '' : 's'}; ` +
     `${written} ${written === 1 ? 'is' : 'are'} written (${spaced}). ${text}`;
-  const d: Diagnostic = { severity: 'error', id: 'bead-count', message, range: unit.range };
+  const closes =
+    where.layout === 'flat' ? '' : `, and a ${where.word}'s last unit also shares its far bead with the first`;
+  const hint = `a unit takes only the beads it does not share: 4, less one for each bead it shares with the unit before it or the ${where.word} below${closes}`;
+  const d: Diagnostic = { severity: 'error', id: 'bead-count', message, range: unit.range, hint };
   if (fix) d.fix = fix;
   return d;
 }

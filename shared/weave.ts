@@ -108,6 +108,7 @@ class Builder {
             'too-large',
             `the pattern expands past ${UNIT_LIMIT.toLocaleString('en')} units; it is built up to ${node.word} ${n - 1}`,
             node.range,
+            'check the repeat counts and row ranges; a pattern this large is refused',
           );
           return;
         }
@@ -160,6 +161,7 @@ class Builder {
               'no-base-left',
               `${word} ${n}: this skip has no bead of ${word} ${below} left to pass over`,
               item.range,
+              `remove the '-', or add units to ${word} ${below}`,
             );
           return { row, complete: false };
         }
@@ -212,7 +214,9 @@ class Builder {
           'no-base-left',
           `${word} ${n}, unit ${index}: this unit needs a base bead, but ${word} ${below} has none left to build on`,
           item.range,
-          first || w.layout === 'tube' ? undefined : "Mark an increase with '+' if a new unit is meant here.",
+          first || w.layout === 'tube'
+            ? `end ${word} ${n} before this unit, or add units to ${word} ${below}`
+            : "Mark an increase with '+' if a new unit is meant here.",
         );
         return { row, complete: false };
       }
