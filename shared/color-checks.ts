@@ -7,7 +7,7 @@
 import { differenceCiede2000, parse, type Color } from 'culori';
 import type { Diagnostic, SourceRange } from './diagnostic.js';
 import type { PatternAst } from '../parser/ast.js';
-import type { Model } from './model.js';
+import type { Model, RowInfo } from './model.js';
 
 export interface MaterialCheckOptions {
   /** CIEDE2000 distance below which two palette colours warn (default 8). */
@@ -73,9 +73,13 @@ export function flatCircle(model: Model, ast: PatternAst): Diagnostic[] {
   if (model.layout.kind !== 'round') return [];
   const out: Diagnostic[] = [];
   const expected = FLAT_CIRCLE_ADDS;
+  const broken = (r: RowInfo): boolean => r.units.some((id) => model.units[id]?.failed === true);
   for (let i = 1; i < model.rows.length; i++) {
     const prev = model.rows[i - 1]!;
     const row = model.rows[i]!;
+    // A round that broke off holds fewer units than written, and the rounds after it build on that:
+    // their counts say where the pattern breaks (already an error), not what shape the piece takes.
+    if (broken(prev) || broken(row)) break;
     const added = row.units.length - prev.units.length;
     const ratio = added / expected;
     const shape = ratio < CUP_BELOW ? 'cup' : ratio > RUFFLE_ABOVE ? 'ruffle' : null;

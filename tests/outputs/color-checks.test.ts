@@ -4,6 +4,7 @@ import type { SourceRange } from '../../shared/diagnostic.js';
 import type { Model, RowInfo } from '../../shared/model.js';
 import { FLAT_CIRCLE_ADDS, flatCircle, materialChecks, similarColors } from '../../shared/color-checks.js';
 import { stripModel } from './fixture-strip.js';
+import { compile } from '../../shared/compile.js';
 
 const at = (line: number, column = 1, width = 1): SourceRange => ({
   line,
@@ -120,6 +121,25 @@ describe('flat-circle check for rounds', () => {
     const d = flatCircle(roundModel([6, 12, 12]), ast([], [row(1, 10), range]));
     expect(d).toHaveLength(1);
     expect(d[0]!.range.line).toBe(11);
+  });
+
+  it('stops at a round that broke off: its count is the error, not the shape', () => {
+    // Round 3 runs out of base beads at its 13th unit (round 2 has 6); round 4 is built on the 13 that exist.
+    const text = [
+      'title: Broken round',
+      'layout: round',
+      'colors:',
+      '  A red',
+      'round 1: AAAA (AAA)x4 AA',
+      'round 2: AAA AA AA AA AA A',
+      'round 3: AAA (+AAA AA)x5 +AAA A',
+      'round 4: AAA (+AAA +AAA AA)x11 +AAA A',
+      '',
+    ].join('\n');
+    const compiled = compile(text);
+    expect(compiled.diagnostics.map((d) => d.id)).toContain('no-base-left');
+    // Round 2 adds nothing to round 1 and is still judged; round 4 (13 to 36 units) would ruffle, but is not judged.
+    expect(flatCircle(compiled.value.model, compiled.value.ast).map((d) => d.range.line)).toEqual([6]);
   });
 
   it('does not apply to flat pieces', () => {
