@@ -54,7 +54,9 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
     if ('error' in input) {
       io.stderr.write(`${input.error}\n`);
       exit = EXIT_FAILURE;
-      const diagnostic: Diagnostic = { severity: 'error', id: READ_ERROR, message: input.error, range: fileStart };
+      // The report names its own program; the message keeps only what went wrong.
+      const message = input.error.replace(/^fourfold: /, '');
+      const diagnostic: Diagnostic = { severity: 'error', id: READ_ERROR, message, range: fileStart };
       files.push({ file: displayName(path), ok: false, diagnostics: [diagnostic] });
       continue;
     }

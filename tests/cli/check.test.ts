@@ -50,7 +50,11 @@ const validCheckJson = new Ajv({ allErrors: true }).compile(checkSchema);
 
 interface CheckJson {
   schema: string;
-  files: { file: string; ok: boolean; diagnostics: { severity: string; id: string; line: number; column: number }[] }[];
+  files: {
+    file: string;
+    ok: boolean;
+    diagnostics: { severity: string; id: string; message: string; line: number; column: number }[];
+  }[];
 }
 
 async function check(args: string[], io = fakeIO({ cwd: fixtures })) {
@@ -124,6 +128,7 @@ describe('fourfold check', () => {
     expect(err).toBe("fourfold: cannot read 'no-such.ffp': no such file or folder\n");
     expect(json.files.map((f) => f.file)).toEqual(['broken.ffp', 'no-such.ffp', 'strip.ffp']);
     expect(json.files[1]).toMatchObject({ ok: false, diagnostics: [{ id: 'read-error', line: 1, column: 1 }] });
+    expect(json.files[1]!.diagnostics[0]!.message).toBe("cannot read 'no-such.ffp': no such file or folder");
   });
 
   it('a missing file or a folder is exit 2 with one clear line', async () => {

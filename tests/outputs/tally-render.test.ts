@@ -89,8 +89,12 @@ describe('tally table', () => {
   it('lines the columns up on a colour terminal as without colour: escapes take no room', () => {
     const esc = String.fromCharCode(27);
     const shown = (s: string): string => s.replace(new RegExp(`${esc}\\[[0-9;]*m`, 'g'), '');
-    const colourLines = renderTallyTable(t, options, true).split('\n').slice(3, 3 + 1 + t.colors.length);
-    const plainLines = renderTallyTable(t, options, false).split('\n').slice(3, 3 + 1 + t.colors.length);
+    const colourLines = renderTallyTable(t, options, true)
+      .split('\n')
+      .slice(3, 3 + 1 + t.colors.length);
+    const plainLines = renderTallyTable(t, options, false)
+      .split('\n')
+      .slice(3, 3 + 1 + t.colors.length);
     // The swatch is four cells wide plus two of gap, so every line is six wider, header included.
     colourLines.forEach((line, i) => {
       expect(shown(line).length).toBe(plainLines[i]!.length + 6);
