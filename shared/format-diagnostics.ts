@@ -92,7 +92,9 @@ function codeFrame(d: Diagnostic, lines: readonly string[], color: boolean): str
 
 function clip(cps: string[], from: number): string {
   const cut = cps.slice(from, from + WINDOW).join('');
+  // C0, DEL and C1 controls (U+009B starts an escape on some terminals) and the bidirectional
+  // embeddings and isolates, which would reorder the printed line so the caret misses its place.
   // eslint-disable-next-line no-control-regex -- control characters are exactly what is matched
-  const visible = cut.replace(/[\u0000-\u0008\u000b-\u001f\u007f]/g, '\ufffd');
+  const visible = cut.replace(/[\u0000-\u0008\u000b-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/g, '\ufffd');
   return (from > 0 ? '…' : '') + visible + (cps.length > from + WINDOW ? '…' : '');
 }
