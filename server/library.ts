@@ -67,10 +67,12 @@ export async function listPatterns(db: Db, ctx: AuthContext, query: LibraryQuery
     db.sequelize.query<Row>(page, {
       replacements: [...params, query.pageSize, (query.page - 1) * query.pageSize],
       type: QueryTypes.SELECT,
+      raw: true,
     }),
     db.sequelize.query<{ n: number | bigint }>(`SELECT COUNT(*) AS n FROM patterns p WHERE ${where}`, {
       replacements: params,
       type: QueryTypes.SELECT,
+      raw: true,
     }),
   ]);
   const items = rows.map((r) =>
@@ -101,7 +103,7 @@ export async function viewableVersionId(
   const rows = await db.sequelize.query<{ id: number }>(
     `SELECT v.id FROM patterns p JOIN versions v ON v.patternId = p.id AND v.number = COALESCE(?, p.currentVersion)
      WHERE p.id = ? AND (${seen.sql})`,
-    { replacements: [number ?? null, patternId, ...seen.params], type: QueryTypes.SELECT },
+    { replacements: [number ?? null, patternId, ...seen.params], type: QueryTypes.SELECT, raw: true },
   );
   return rows[0]?.id ?? null;
 }
