@@ -3,6 +3,7 @@ import { useEffect, useRef } from 'react';
 import { Link, NavLink, Outlet, useLocation, useNavigate, useNavigation } from 'react-router-dom';
 import { useSession } from '../api/session.js';
 import { useSignOut } from '../queries/auth.js';
+import { focusMain, useRouteFocus } from '../lib/use-route-focus.js';
 import { ThemeSwitch } from './theme-switch.js';
 
 const navClass = ({ isActive }: { isActive: boolean }) =>
@@ -15,6 +16,8 @@ export function AppShell() {
   const navigate = useNavigate();
   const role = session?.user.role;
   const location = useLocation();
+  const main = useRef<HTMLElement>(null);
+  useRouteFocus(main);
   const hadSession = useRef(session !== null);
   // A session the server stopped accepting (expired, revoked elsewhere) ends here: back to sign-in, then back to this page.
   useEffect(() => {
@@ -27,6 +30,11 @@ export function AppShell() {
     <div className="flex min-h-screen flex-col">
       <a
         href="#main"
+        onClick={(e) => {
+          // Moving focus (not only scrolling) makes the next Tab start inside the page.
+          e.preventDefault();
+          if (main.current) focusMain(main.current);
+        }}
         className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:bg-white focus:p-2 dark:focus:bg-slate-900"
       >
         Skip to content
@@ -76,7 +84,13 @@ export function AppShell() {
           {navigation.state === 'loading' && <div className="h-full w-full animate-pulse bg-teal-700" />}
         </div>
       </header>
-      <main id="main" className="mx-auto w-full max-w-7xl flex-1 px-4 py-6" aria-busy={navigation.state === 'loading'}>
+      <main
+        ref={main}
+        id="main"
+        tabIndex={-1}
+        className="mx-auto w-full max-w-7xl flex-1 px-4 py-6 focus:outline-none"
+        aria-busy={navigation.state === 'loading'}
+      >
         <Outlet />
       </main>
     </div>
