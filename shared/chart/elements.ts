@@ -5,7 +5,7 @@
  * chart. The walk builds no tree of its own: a 5,000-bead chart would
  * otherwise allocate tens of thousands of short-lived arrays.
  */
-import { round2 } from './geometry.js';
+import { round2, round2Text } from './geometry.js';
 import type {
   BeadPrim,
   DataAttrs,
@@ -32,20 +32,10 @@ export interface SvgSink {
   close(tag: string): void;
 }
 
-/**
- * A scene number (already rounded to 2 decimals) as text: the same digits
- * as `String(n)` gives, built from whole hundredths because formatting small
- * integers is several times faster than formatting doubles.
- */
+/** A scene number (already rounded to 2 decimals) as text: the same digits as `String(n)` gives. */
 export function formatNumber(n: number): string {
   const cents = Math.round(n * 100);
-  if (!Number.isSafeInteger(cents) || Math.abs(n * 100 - cents) > 1e-6) return String(n);
-  const abs = Math.abs(cents);
-  const whole = Math.floor(abs / 100);
-  const frac = abs % 100;
-  const sign = cents < 0 ? '-' : '';
-  if (frac === 0) return `${sign}${whole}`;
-  return `${sign}${whole}.${frac < 10 ? `0${frac}` : frac % 10 === 0 ? frac / 10 : frac}`;
+  return Number.isSafeInteger(cents) && Math.abs(n * 100 - cents) <= 1e-6 ? round2Text(n) : String(n);
 }
 
 /** One embedded font face: a subset of the bundled font, base64-encoded by the caller. */

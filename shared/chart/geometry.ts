@@ -11,6 +11,22 @@ export const round2 = (n: number): number => {
   return Object.is(r, -0) ? 0 : r;
 };
 
+const FRACTIONS = Array.from({ length: 100 }, (_, f) =>
+  f === 0 ? '' : `.${f < 10 ? `0${f}` : f % 10 === 0 ? f / 10 : f}`,
+);
+
+/**
+ * `String(round2(n))`, built from whole hundredths: formatting a small
+ * integer is several times faster than formatting a double, and a chart
+ * has tens of thousands of numbers.
+ */
+export function round2Text(n: number): string {
+  const cents = Math.round(n * 100);
+  if (!Number.isSafeInteger(cents)) return String(round2(n));
+  const abs = Math.abs(cents);
+  return `${cents < 0 ? '-' : ''}${Math.floor(abs / 100)}${FRACTIONS[abs % 100]!}`;
+}
+
 export interface PageTransform {
   /** mm per unit side. */
   scale: number;
@@ -27,9 +43,10 @@ export const toPage = (t: PageTransform, p: Point): Point => ({
 });
 
 export function pointPath(points: readonly Point[], closed: boolean): string {
-  let d = '';
-  for (let i = 0; i < points.length; i++) d += `${i === 0 ? 'M' : ' L'}${round2(points[i]!.x)} ${round2(points[i]!.y)}`;
-  return closed ? `${d} Z` : d;
+  // Joined rather than appended: the scene keeps every path, and a string built with `+=` is kept as a rope.
+  const parts = points.map((p, i) => `${i === 0 ? 'M' : 'L'}${round2Text(p.x)} ${round2Text(p.y)}`);
+  if (closed) parts.push('Z');
+  return parts.join(' ');
 }
 
 const CORNER_PLACES: Record<Corner, [Place, Place]> = {
@@ -50,7 +67,8 @@ export function cornerJunction(model: Model, unit: Unit, corner: Corner): number
   const ja = model.beads[a]?.junctions;
   const jb = model.beads[b]?.junctions;
   if (!ja || !jb) return null;
-  return ja.find((j) => jb.includes(j)) ?? null;
+  for (const j of ja) if (jb.includes(j)) return j;
+  return null;
 }
 
 /**

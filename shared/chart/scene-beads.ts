@@ -2,7 +2,7 @@
  * The piece itself: unit cells, bead capsules with their key letters, cue
  * arrowheads, failed-unit marks and unit numbers.
  */
-import type { Model, Unit, UnitStep } from '../model.js';
+import type { Bead, Model, Unit, UnitStep } from '../model.js';
 import { labelColors } from './contrast.js';
 import {
   arrowhead,
@@ -41,14 +41,12 @@ export function beads(model: Model, t: PageTransform, theme: Theme): BeadPrim[] 
   const hex = new Map(model.palette.map((p) => [p.key, p.hex]));
   const ink = labelColors([...hex.values(), '#808080']);
   const thickness = round2(BEAD_THICKNESS * t.scale);
-  // Gap beads go last: they are short and sit where other beads' ends meet, which would hide them.
-  const order = [...model.beads.filter((b) => !b.gap), ...model.beads.filter((b) => b.gap)];
-  return order.map((bead) => {
+  const size = round2(thickness * 0.8);
+  const toPrim = (bead: Bead): BeadPrim => {
     const fill = hex.get(bead.color) ?? '#808080';
     const centre = toPage(t, bead);
     const length = round2(bead.length * t.scale);
     const unit = model.units[bead.units[0] ?? 0];
-    const size = round2(thickness * 0.8);
     const prim: BeadPrim = {
       kind: 'bead',
       id: `ff-bead-${bead.id}`,
@@ -77,7 +75,12 @@ export function beads(model: Model, t: PageTransform, theme: Theme): BeadPrim[] 
       };
     }
     return prim;
-  });
+  };
+  // Gap beads go last: they are short and sit where other beads' ends meet, which would hide them.
+  const out: BeadPrim[] = [];
+  for (const bead of model.beads) if (!bead.gap) out.push(toPrim(bead));
+  for (const bead of model.beads) if (bead.gap) out.push(toPrim(bead));
+  return out;
 }
 
 /** An arrowhead inside the cell by the start corner, pointing along the first new bead. */

@@ -74,19 +74,27 @@ export function buildScene(model: Model, options: SceneOptions = {}): Result<Sce
       data: {},
     });
   }
-  items.push(...cells(model, t, theme), ...seam(model, t, theme), ...beads(model, t, theme));
-  items.push(...failures(model, t, theme), ...cues(model, t, theme));
-  if (options.numbers) items.push(...unitNumbers(model, t, theme, model.layout.kind === 'round'));
-  items.push(...rowNumbers(model, t, theme, pieceLeft));
+  // Appended one by one: spreading a list of thousands of beads into push() puts them all on the stack.
+  const add = (list: readonly Primitive[]): void => {
+    for (const item of list) items.push(item);
+  };
+  add(cells(model, t, theme));
+  add(seam(model, t, theme));
+  add(beads(model, t, theme));
+  add(failures(model, t, theme));
+  add(cues(model, t, theme));
+  if (options.numbers) add(unitNumbers(model, t, theme, model.layout.kind === 'round'));
+  add(rowNumbers(model, t, theme, pieceLeft));
 
   const diagnostics = [];
   if (options.thread !== undefined) {
     const overlay = threadOverlay(model, options.thread, t, theme);
-    items.push(...overlay.value);
+    add(overlay.value);
     diagnostics.push(...overlay.diagnostics);
   }
-  items.push(...title.items, ...key.items);
-  if (options.scale === 'mm') items.push(...scaleBar(theme, MARGIN, barTop));
+  add(title.items);
+  add(key.items);
+  if (options.scale === 'mm') add(scaleBar(theme, MARGIN, barTop));
 
   return {
     value: {
