@@ -45,7 +45,10 @@ export function meetsGoal(f: Figure): boolean {
 
 export function formatFigure(f: Figure): string {
   const r = ratioOf(f);
-  const what = f.baseline === undefined ? `${r.toFixed(2)} ${f.unit}` : `${r.toFixed(2)}x (${f.value.toFixed(2)} vs ${f.baseline.toFixed(2)} ${f.unit})`;
+  const what =
+    f.baseline === undefined
+      ? `${r.toFixed(2)} ${f.unit}`
+      : `${r.toFixed(2)}x (${f.value.toFixed(2)} vs ${f.baseline.toFixed(2)} ${f.unit})`;
   const goal = f.goal
     ? ` goal ${f.goal.atMost !== undefined ? `<= ${f.goal.atMost}` : `>= ${f.goal.atLeast}`} ${meetsGoal(f) ? 'met' : 'MISSED'}`
     : '';
