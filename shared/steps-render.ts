@@ -43,9 +43,28 @@ export function unitSentences(step: StepUnit, word: StepRow['word']): string[] {
   return lines;
 }
 
+/** ", leaving 1 bead of row 7 uncovered at the start and 1 at the end", or '' where the row covers them all. */
+function uncoveredPhrase(row: StepRow): string {
+  const u = row.uncovered;
+  if (!u) return '';
+  const counts = (
+    [
+      [u.start, 'at the start'],
+      [u.end, 'at the end'],
+      [u.along, 'along the way'],
+    ] as const
+  ).filter(([n]) => n > 0);
+  // The first count carries the noun, the others only their number.
+  const phrases = counts.map(([n, where], i) =>
+    i === 0 ? `${plural(n, 'bead')} of ${row.word} ${row.row - 1} uncovered ${where}` : `${n} ${where}`,
+  );
+  const last = phrases.pop()!;
+  return `, leaving ${phrases.length ? `${phrases.join(', ')} and ${last}` : last}`;
+}
+
 export function rowHeading(row: StepRow): string {
   const name = row.word === 'round' ? 'Round' : 'Row';
-  return `${name} ${row.row}: ${plural(row.units, 'unit')}, ${plural(row.beads, 'new bead')}, ${row.direction}`;
+  return `${name} ${row.row}: ${plural(row.units, 'unit')}, ${plural(row.beads, 'new bead')}, ${row.direction}${uncoveredPhrase(row)}`;
 }
 
 function byline(doc: StepsDoc): string {

@@ -41,6 +41,12 @@ export interface StepRow {
   units: number;
   beads: number;
   direction: string;
+  /**
+   * Top beads of the row before that this row builds nothing on (skips, a
+   * narrowing edge), counted at its start, at its end and along the way;
+   * absent when it builds on every one.
+   */
+  uncovered?: { start: number; end: number; along: number };
   notes: string[];
   steps: StepUnit[];
 }
@@ -144,10 +150,26 @@ function roundMoves(ctx: Ctx, step: UnitStep, heading: Heading): StepMove[] {
   return moves;
 }
 
-function buildRow(ctx: Ctx, row: RowInfo, stepOf: Map<number, UnitStep>): StepRow {
+/** Which top beads of `below` the row leaves without a unit on them, in the order the row meets them. */
+function uncoveredOf(model: Model, row: RowInfo, below: RowInfo | undefined): StepRow['uncovered'] {
+  if (!below) return undefined;
+  const used = new Set(row.units.map((id) => model.units[id]?.places.base));
+  const met = row.heading === 'around' ? below.units : [...below.units].reverse();
+  const bare = met.map((id) => model.units[id]?.places.top ?? null).map((b) => b !== null && !used.has(b));
+  const count = bare.filter(Boolean).length;
+  if (count === 0) return undefined;
+  const first = bare.indexOf(false);
+  // A row that covers nothing at all (it broke off): everything counts as its start.
+  if (first === -1) return { start: count, end: 0, along: 0 };
+  const end = bare.length - 1 - bare.lastIndexOf(false);
+  return { start: first, end, along: count - first - end };
+}
+
+function buildRow(ctx: Ctx, row: RowInfo, stepOf: Map<number, UnitStep>, below?: RowInfo): StepRow {
   const { model } = ctx;
   const sides = new Set<number>();
   const steps: StepUnit[] = [];
+  const uncovered = uncoveredOf(model, row, below);
   row.units.forEach((id, i) => {
     const unit = model.units[id]!;
     const next = model.units[row.units[i + 1] ?? -1];
@@ -177,6 +199,7 @@ function buildRow(ctx: Ctx, row: RowInfo, stepOf: Map<number, UnitStep>): StepRo
       0,
     ),
     direction: directionWords(row.heading, row.word, row.row === 1),
+    ...(uncovered ? { uncovered } : {}),
     notes: row.notes,
     steps,
   };
@@ -198,6 +221,6 @@ export function buildSteps(model: Model): StepsDoc {
     colors: model.palette.map((p) => ({ key: p.key, name: colorName(p), hex: p.hex })),
     glossary: glossary(model),
     notes: model.header.notes,
-    rows: model.rows.map((r) => buildRow(ctx, r, stepOf)),
+    rows: model.rows.map((r, i) => buildRow(ctx, r, stepOf, model.rows[i - 1])),
   };
 }

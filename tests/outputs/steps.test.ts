@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { XMLValidator } from 'fast-xml-parser';
 import { buildSteps } from '../../shared/steps.js';
-import { renderStepsHtml, renderStepsMarkdown, renderStepsText } from '../../shared/steps-render.js';
+import { renderStepsHtml, renderStepsMarkdown, renderStepsText, rowHeading } from '../../shared/steps-render.js';
+import { compile } from '../../shared/compile.js';
 import { tally } from '../../shared/tally.js';
 import { stripModel } from './fixture-strip.js';
 
@@ -77,5 +78,37 @@ describe('steps document on a hand-built strip', () => {
   it('is plain JSON for --format json', () => {
     expect(JSON.parse(JSON.stringify(doc))).toEqual(doc);
     expect(doc.schema).toBe('fourfold.steps/1');
+  });
+});
+
+describe('rows that leave beads of the row below uncovered', () => {
+  const stepsOf = (lines: string[]) => {
+    const compiled = compile(['title: T', ...lines, ''].join('\n'));
+    expect(compiled.diagnostics.filter((d) => d.severity === 'error')).toEqual([]);
+    return buildSteps(compiled.value.model);
+  };
+
+  it('counts the skips at the start and the end of a narrowing flat row, in the heading', () => {
+    const doc = stepsOf(['colors:', '  A red', 'row 1: AAAA AAA AAA AAA', 'row 2: - AAA AA -']);
+    expect(doc.rows[0]!.uncovered).toBeUndefined();
+    expect(doc.rows[1]!.uncovered).toEqual({ start: 1, end: 1, along: 0 });
+    expect(renderStepsText(doc)).toContain(
+      'Row 2: 2 units, 5 new beads, working right to left, leaving 1 bead of row 1 uncovered at the start and 1 at the end\n',
+    );
+  });
+
+  it('counts a flat row that stops short without a skip, and a skip inside a round', () => {
+    const flat = stepsOf(['colors:', '  A red', 'row 1: AAAA AAA AAA', 'row 2: AAA']);
+    // Row 2 is worked right to left, so the two bare tops are at its end.
+    expect(flat.rows[1]!.uncovered).toEqual({ start: 0, end: 2, along: 0 });
+    const round = stepsOf([
+      'layout: round',
+      'colors:',
+      '  A red',
+      'round 1: AAAA (AAA)x4 AA',
+      'round 2: AAA AA - AA AA A',
+    ]);
+    expect(round.rows[1]!.uncovered).toEqual({ start: 0, end: 0, along: 1 });
+    expect(rowHeading(round.rows[1]!)).toMatch(/, leaving 1 bead of round 1 uncovered along the way$/);
   });
 });
