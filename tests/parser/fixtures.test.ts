@@ -1,25 +1,20 @@
 /**
  * Fixture folders: every `good/*.ffp` parses without errors to the AST in its
  * golden `.ast.json`; every `errors/*.ffp` gives the human diagnostics in its
- * golden `.txt`. Goldens are written when missing or with UPDATE_GOLDEN=1.
+ * golden `.txt` (see tests/golden.ts for how goldens are written).
  */
-import { existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, test } from 'vitest';
 import { parseBytes } from '../../parser/index.js';
 import { formatDiagnostics } from '../../shared/format-diagnostics.js';
+import { expectGolden as golden } from '../golden.js';
 
 const dir = join(import.meta.dirname, 'fixtures');
-const update = process.env.UPDATE_GOLDEN === '1';
 const ffp = (sub: string): string[] =>
   readdirSync(join(dir, sub))
     .filter((f) => f.endsWith('.ffp'))
     .sort();
-
-function golden(path: string, actual: string): void {
-  if (update || !existsSync(path)) writeFileSync(path, actual);
-  expect(actual).toBe(readFileSync(path, 'utf8'));
-}
 
 describe('good fixtures', () => {
   test.each(ffp('good'))('%s', (name) => {
