@@ -71,7 +71,12 @@ async function fmtOne(path: string, mode: Mode, order: KeyOrder | undefined, io:
     ? { text: null, diagnostics: input.diagnostics }
     : formatText(input.text, order);
   printDiagnostics(input.file, input.text, result.diagnostics, io);
-  if (result.text === null) return { outcome, exit: EXIT_PATTERN_ERRORS };
+  if (result.text === null) {
+    // Said once, after the diagnostics, so no one takes the silence on standard output for success.
+    const what = order && !result.diagnostics.some(blocksFormatting) ? `converted to ${order} order` : 'formatted';
+    if (!json) io.stderr.write(`fourfold: '${input.file}' is not ${what}: fix the errors above first\n`);
+    return { outcome, exit: EXIT_PATTERN_ERRORS };
+  }
   outcome.ok = true;
   outcome.changed = result.text !== input.text;
   if (mode === 'check') {

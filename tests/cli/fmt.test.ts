@@ -69,7 +69,17 @@ describe('fourfold fmt', () => {
     const r = await fmt(['--write', 'syntax.ffp']);
     expect(r.code).toBe(1);
     expect(r.err).toMatch(/^syntax\.ffp:5:\d+: error\[/m);
+    expect(r.err).toMatch(/^fourfold: 'syntax\.ffp' is not formatted: fix the errors above first$/m);
     expect(read('syntax.ffp')).toBe(before);
+  });
+
+  it('--order on a pattern the engine cannot build reports its errors and says it is not converted', async () => {
+    const wrong = 'title: Wrong\ncolors:\n  A red\nrow 1: AAAA AAA\nrow 2: AAA AAA\n';
+    const r = await fmt(['--order', 'placed', '-'], wrong);
+    expect(r.code).toBe(1);
+    expect(r.out).toBe('');
+    expect(r.err).toMatch(/^<stdin>:5:12: error\[bead-count\]/m);
+    expect(r.err).toMatch(/^fourfold: '<stdin>' is not converted to placed order: fix the errors above first$/m);
   });
 
   it('a missing file is exit 2, and 2 wins over a file that is not formatted', async () => {
