@@ -104,6 +104,10 @@ describe('designer and tester in the browser', () => {
     await page.getByTestId('tally-beads').waitFor();
     // Cumulative layout shift of the whole load; 0.1 is the "good" limit of web.dev's Core Web Vitals (from memory).
     expect(await layoutShift(page)).toBeLessThan(0.1);
+    // Fit fills the pane's width: the chart's background is as wide as its box, not a narrow strip in the middle.
+    const host = await page.getByTestId('chart').boundingBox();
+    const drawn = await page.getByTestId('chart').locator('.ff-background').first().boundingBox();
+    expect(Math.abs(drawn!.width - host!.width)).toBeLessThan(4);
     // The measure itself works: pushing the page down by a block is a shift it sees.
     await page.evaluate(() => {
       const doc = (

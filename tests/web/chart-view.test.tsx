@@ -1,9 +1,9 @@
-import { describe, expect, it, vi } from 'vitest';
+import { afterEach, describe, expect, it, vi } from 'vitest';
 import { fireEvent, render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { ChartView } from '../../web/src/components/chart-view.js';
 import { localTally } from '../../web/src/lib/compiled.js';
-import { zoomAt, pan, MAX_ZOOM, type Box } from '../../web/src/lib/zoom.js';
+import { fitWidth, zoomAt, pan, reveal, reshape, MAX_ZOOM, type Box } from '../../web/src/lib/zoom.js';
 import { beadInfo } from '../../web/src/lib/bead-info.js';
 import { modelOf } from './helpers.js';
 
@@ -62,6 +62,41 @@ describe('chart view', () => {
     expect(svg.getAttribute('viewBox')!.split(' ').map(Number)).toEqual(before);
   });
 
+  describe('in a box held wider than the chart (a tall band under the height limit)', () => {
+    // jsdom lays nothing out; the box is given the size a browser would, 800 by 400 px.
+    const size = (name: 'clientWidth' | 'clientHeight', v: number) =>
+      vi.spyOn(HTMLElement.prototype, name, 'get').mockReturnValue(v);
+    afterEach(() => vi.restoreAllMocks());
+    const band =
+      'title: Tall Band\ncolors:\n  A #f4f1ea chalk\n  B #2e6f8e deep teal\nrow 1: BBBB AAA BBB\nrows 2-30: AAA BB AA\n';
+
+    it('fits the chart to the box’s width at load, centred on the reader’s unit, and Fit comes back to it', async () => {
+      size('clientWidth', 800);
+      size('clientHeight', 400);
+      const model = modelOf(band);
+      const current = model.rows[0]!.units[1]!;
+      const { container } = render(<ChartView model={model} dark={false} current={current} />);
+      const svg = container.querySelector('svg')!;
+      const [x, y, w, h] = svg.getAttribute('viewBox')!.split(' ').map(Number) as [number, number, number, number];
+      const width = Number(svg.querySelector('.ff-background')!.getAttribute('width'));
+      expect(x).toBe(0);
+      expect(w).toBeCloseTo(width, 5);
+      // The view has the box's shape, so nothing is letterboxed: 400 / 800.
+      expect(h / w).toBeCloseTo(0.5, 5);
+      // Row 1 is at the bottom of the chart: the view is scrolled there, not left at the title.
+      expect(y).toBeGreaterThan(0);
+      const unitBeads = [...container.querySelectorAll(`.ff-bead[data-unit="${current}"]`)];
+      expect(unitBeads.length).toBeGreaterThan(0);
+      await userEvent.click(screen.getByRole('button', { name: 'Zoom in' }));
+      await userEvent.click(screen.getByRole('button', { name: 'Fit' }));
+      expect(svg.getAttribute('viewBox')).toBe(`${x} ${y} ${w} ${h}`);
+      // Zooming out goes past the fit to the whole chart in view.
+      for (let i = 0; i < 12; i++) await userEvent.click(screen.getByRole('button', { name: 'Zoom out' }));
+      const whole = svg.getAttribute('viewBox')!.split(' ').map(Number);
+      expect(whole[3]).toBeCloseTo(Number(svg.querySelector('.ff-background')!.getAttribute('height')), 5);
+    });
+  });
+
   it('tells where a bead sits in each unit that holds it, and its colour', () => {
     const model = modelOf(panel);
     const shared = model.beads.find((b) => b.units.length === 2)!;
@@ -82,5 +117,23 @@ describe('zoom arithmetic', () => {
     expect(zoomAt(full, full, 0.1, 0, 0)).toEqual(full);
     expect(pan(z, full, -1000, 0).x).toBe(0);
     expect(pan(z, full, 1000, 1000)).toEqual({ x: 100, y: 50, w: 100, h: 50 });
+  });
+
+  const tall: Box = { x: 0, y: 0, w: 100, h: 400 };
+  it('fits the width of a tall chart into a wide box and centres on a point, inside the chart', () => {
+    expect(fitWidth(tall, 0.5)).toEqual({ x: 0, y: 0, w: 100, h: 50 });
+    expect(fitWidth(tall, 0.5, { x: 50, y: 200 })).toEqual({ x: 0, y: 175, w: 100, h: 50 });
+    expect(fitWidth(tall, 0.5, { x: 50, y: 395 })).toEqual({ x: 0, y: 350, w: 100, h: 50 });
+    // A box taller than the chart's shape shows it whole, centred: a 100 x 200 view of a 200 x 100 chart.
+    expect(fitWidth(full, 1)).toEqual({ x: 0, y: -50, w: 200, h: 200 });
+    // Zooming out stops with the whole height in view: 400 / 0.5 = 800 wide, centred.
+    expect(zoomAt(fitWidth(tall, 0.5), tall, 0.001, 50, 25)).toEqual({ x: -350, y: 0, w: 800, h: 400 });
+  });
+
+  it('pans only when the point leaves the middle of the view, and keeps the width when the box changes shape', () => {
+    const view = fitWidth(tall, 0.5);
+    expect(reveal(view, tall, { x: 50, y: 25 })).toBe(view);
+    expect(reveal(view, tall, { x: 50, y: 300 })).toEqual({ x: 0, y: 275, w: 100, h: 50 });
+    expect(reshape(view, tall, 1)).toEqual({ x: 0, y: 0, w: 100, h: 100 });
   });
 });

@@ -7,10 +7,10 @@
  */
 import { useEffect, useLayoutEffect, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent } from 'react';
 import type { Model } from '../../../shared/model.js';
-import { buildScene } from '../../../shared/chart/scene.js';
+import { buildScene, type Scene } from '../../../shared/chart/scene.js';
 import type { ChartHandle } from '../../../shared/chart/svg-dom.js';
 import { drawChart, drawThread } from '../lib/draw-chart.js';
-import { boxText, pan, zoomAt, type Box } from '../lib/zoom.js';
+import { boxText, fitWidth, pan, reshape, reveal, zoomAt, type Box, type Point } from '../lib/zoom.js';
 import { beadInfo, type BeadInfo } from '../lib/bead-info.js';
 
 export interface ChartViewProps {
@@ -23,6 +23,17 @@ export interface ChartViewProps {
   onPick?(unitId: number): void;
 }
 
+/** The middle of a unit's beads in chart units, to keep the reader's unit in view. */
+function unitCentre(scene: Scene, unit: number | undefined): Point | undefined {
+  if (unit === undefined) return undefined;
+  const beads = scene.items.flatMap((p) => (p.kind === 'bead' && p.unit === unit ? [p] : []));
+  if (!beads.length) return undefined;
+  return {
+    x: beads.reduce((t, b) => t + b.x, 0) / beads.length,
+    y: beads.reduce((t, b) => t + b.y, 0) / beads.length,
+  };
+}
+
 export function ChartView({ model, dark, current, noted = [], onPick }: ChartViewProps) {
   const figure = useRef<HTMLElement>(null);
   const host = useRef<HTMLDivElement>(null);
@@ -30,7 +41,14 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
   const drag = useRef<{ x: number; y: number; box: Box; moved: boolean } | null>(null);
   const scene = useMemo(() => buildScene(model, { theme: dark ? 'dark' : 'light' }).value, [model, dark]);
   const full: Box = useMemo(() => ({ x: 0, y: 0, w: scene.width, h: scene.height }), [scene]);
-  const [box, setBox] = useState<Box>(full);
+  // The box's shape on the page (height over width); until it is measured, the chart's own, which the box reserves.
+  const [measured, setMeasured] = useState<number | null>(null);
+  const aspect = measured ?? scene.height / scene.width;
+  const centre = useMemo(() => unitCentre(scene, current), [scene, current]);
+  const fit = () => fitWidth(full, aspect, centre);
+  const [box, setBox] = useState<Box>(fit);
+  // True until the reader zooms or pans: a view still at its fit is fitted again when the box changes shape.
+  const fitted = useRef(true);
   const [hover, setHover] = useState<{ info: BeadInfo; left: number; top: number } | null>(null);
   const currentRow = current === undefined ? undefined : model.units[current]?.row;
   const threadScene = useMemo(
@@ -40,13 +58,35 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
   );
 
   useLayoutEffect(() => {
+    const el = host.current;
+    if (!el) return;
+    const measure = () => {
+      if (el.clientWidth > 0 && el.clientHeight > 0) setMeasured(el.clientHeight / el.clientWidth);
+    };
+    measure();
+    const observer = typeof ResizeObserver === 'undefined' ? null : new ResizeObserver(measure);
+    observer?.observe(el);
+    return () => observer?.disconnect();
+  }, []);
+
+  useLayoutEffect(() => {
     if (!host.current) return;
     chart.current = drawChart(host.current, scene);
-    setBox(full);
+    fitted.current = true;
     return () => chart.current?.remove();
-  }, [scene, full]);
+  }, [scene]);
 
-  useEffect(() => {
+  useLayoutEffect(() => {
+    setBox((b) => (fitted.current ? fitWidth(full, aspect, centre) : reshape(b, full, aspect)));
+    // The centre is read, not followed: stepping pans through `reveal` below instead of refitting.
+  }, [full, aspect]);
+
+  useLayoutEffect(() => {
+    if (centre) setBox((b) => reveal(b, full, centre));
+  }, [centre, full]);
+
+  // Before paint, so the first frame already shows the fitted view.
+  useLayoutEffect(() => {
     chart.current?.svg.attr('viewBox', boxText(box));
   }, [box, scene]);
 
@@ -62,6 +102,14 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
     return threadScene && current !== undefined ? drawThread(c, threadScene, current) : undefined;
   }, [scene, model, current, noted, threadScene]);
 
+  const moveTo = (next: Box | ((b: Box) => Box)) => {
+    fitted.current = false;
+    setBox(next);
+  };
+  const refit = () => {
+    fitted.current = true;
+    setBox(fit());
+  };
   const toChart = (clientX: number, clientY: number) => {
     const rect = chart.current!.svg.node.getBoundingClientRect();
     return {
@@ -69,8 +117,8 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
       y: box.y + ((clientY - rect.top) / rect.height) * box.h,
     };
   };
-  const zoom = (factor: number, at?: { x: number; y: number }) =>
-    setBox((b) => zoomAt(b, full, factor, at?.x ?? b.x + b.w / 2, at?.y ?? b.y + b.h / 2));
+  const zoom = (factor: number, at?: Point) =>
+    moveTo((b) => zoomAt(b, full, factor, at?.x ?? b.x + b.w / 2, at?.y ?? b.y + b.h / 2));
 
   const onPointerMove = (e: PointerEvent) => {
     if (drag.current && chart.current) {
@@ -78,7 +126,7 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
       const dx = ((drag.current.x - e.clientX) / rect.width) * drag.current.box.w;
       const dy = ((drag.current.y - e.clientY) / rect.height) * drag.current.box.h;
       if (Math.abs(e.clientX - drag.current.x) + Math.abs(e.clientY - drag.current.y) > 3) drag.current.moved = true;
-      setBox(pan(drag.current.box, full, dx, dy));
+      moveTo(pan(drag.current.box, full, dx, dy));
       return;
     }
     const el = (e.target as Element).closest?.('[data-bead]');
@@ -106,8 +154,8 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
     };
     if (e.key === '+' || e.key === '=') zoom(1.25);
     else if (e.key === '-') zoom(0.8);
-    else if (e.key === '0') setBox(full);
-    else if (e.shiftKey && moves[e.key]) setBox((b) => pan(b, full, ...moves[e.key]!));
+    else if (e.key === '0') refit();
+    else if (e.shiftKey && moves[e.key]) moveTo((b) => pan(b, full, ...moves[e.key]!));
     else return;
     e.preventDefault();
   };
@@ -121,7 +169,7 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
         <button type="button" className="btn" onClick={() => zoom(0.8)} aria-label="Zoom out">
           −
         </button>
-        <button type="button" className="btn" onClick={() => setBox(full)}>
+        <button type="button" className="btn" onClick={refit}>
           Fit
         </button>
         <span className="muted self-center text-xs">
