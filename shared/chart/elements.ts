@@ -64,7 +64,8 @@ function text(sink: SvgSink, p: TextFields, cls: string, data: DataAttrs | null)
     p.anchor === 'start' ? undefined : p.anchor,
     p.bold ? 'bold' : undefined,
   ];
-  sink.element('text', TEXT_NAMES, data ? values.concat(dataValues(data)) : values, p.text);
+  if (data) values.push(data.unit, data.row, data.pass, data.kind, data.key);
+  sink.element('text', TEXT_NAMES, values, p.text);
 }
 
 const BEAD_NAMES = [

@@ -50,7 +50,15 @@ const TEXT_START = bytesOf('>');
 const OPEN_END = bytesOf('>\n');
 const SVG_NAMES = ['xmlns', ...ROOT_NAMES];
 
+/**
+ * Free bytes kept after every element start and every string written, so
+ * the fixed pieces and numbers between them need no check of their own: an
+ * element's names, quotes and numbers take well under this.
+ */
+const SLACK = 2048;
+
 class TextSink implements SvgSink {
+  /** Starts well above SLACK, so the XML declaration needs no check either. */
   bytes = new Uint8Array(1 << 16);
   length = 0;
 
@@ -61,8 +69,8 @@ class TextSink implements SvgSink {
     this.bytes = grown;
   }
 
+  /** A fixed piece; shorter than SLACK, so there is room for it. */
   put(a: Uint8Array): void {
-    this.room(a.length);
     const { bytes } = this;
     let at = this.length;
     for (let i = 0; i < a.length; i++) bytes[at++] = a[i]!;
@@ -71,7 +79,7 @@ class TextSink implements SvgSink {
 
   /** `s` as UTF-8, with the four characters XML reserves as entities. */
   text(s: string): void {
-    this.room(s.length);
+    this.room(s.length + SLACK);
     const { bytes } = this;
     let at = this.length;
     for (let i = 0; i < s.length; i++) {
@@ -88,7 +96,7 @@ class TextSink implements SvgSink {
   /** The rare rest of a string that needs escaping or is not ASCII (names, titles). */
   private rest(s: string): void {
     const escaped = s.replace(/[&<>"]/g, (ch) => ENTITY[ch]!);
-    this.room(escaped.length * 3);
+    this.room(escaped.length * 3 + SLACK);
     this.length += encoder.encodeInto(escaped, this.bytes.subarray(this.length)).written;
   }
 
@@ -104,7 +112,6 @@ class TextSink implements SvgSink {
   number(n: number): void {
     const cents = Math.round(n * 100);
     if (!Number.isSafeInteger(cents) || Math.abs(n * 100 - cents) > 1e-6) return this.text(String(n));
-    this.room(24);
     const abs = Math.abs(cents);
     if (cents < 0) this.bytes[this.length++] = 45;
     this.digits(Math.floor(abs / 100));
@@ -117,6 +124,7 @@ class TextSink implements SvgSink {
 
   private startTag(tag: TagBytes, names: readonly string[], values: readonly AttrValue[]): void {
     const p = prefixesOf(names);
+    this.room(SLACK);
     this.put(tag.open);
     for (let i = 0; i < values.length; i++) {
       const v = values[i];
@@ -143,6 +151,7 @@ class TextSink implements SvgSink {
   }
 
   close(tag: string): void {
+    this.room(SLACK);
     this.put(tagBytes(tag).close);
   }
 }
