@@ -40,6 +40,10 @@ const REASONS: Record<string, string> = {
   ENOTDIR: 'a part of the path is not a folder',
   ENAMETOOLONG: 'the name is too long',
   ELOOP: 'too many symbolic links',
+  // Creating a missing folder on the way to a file that is in fact a file.
+  EEXIST: 'a part of the path is a file, not a folder',
+  ENOSPC: 'the disk is full',
+  EROFS: 'the disk is read-only',
 };
 
 /** Why a file operation failed, in words rather than an errno. */

@@ -10,7 +10,7 @@ import { isThemeName } from '../../shared/chart/themes.js';
 import { hasErrors } from '../../shared/diagnostic.js';
 import { EXIT_FAILURE, EXIT_OK, EXIT_PATTERN_ERRORS, type CliIO, type ParsedCommand } from '../command.js';
 import { writeFileAtomic } from '../convert/atomic-write.js';
-import { compilePattern } from '../read-input.js';
+import { compilePattern, ioReason } from '../read-input.js';
 import { renderChartFiles } from '../render/chart-files.js';
 import { resolve } from 'node:path';
 
@@ -59,7 +59,7 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
     try {
       await writeFileAtomic(resolve(io.cwd, output), bytes);
     } catch (error) {
-      io.stderr.write(`fourfold: cannot write '${output}': ${(error as Error).message}\n`);
+      io.stderr.write(`fourfold: cannot write '${output}': ${ioReason(error)}\n`);
       return EXIT_FAILURE;
     }
   }
