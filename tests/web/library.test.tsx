@@ -24,6 +24,29 @@ describe('library page', () => {
     expect(urls.filter((u) => u.includes('q='))).toHaveLength(1);
   });
 
+  it('shows in the search box what the list was searched for when the reader goes back and forward', async () => {
+    setSession({ token: 't', user: tester });
+    const api = mockApi({ 'GET /api/patterns': { json: { items: [], total: 0, page: 1, pageSize: 25 } } });
+    const { router } = renderRoutes(routes, '/library');
+    const box = await screen.findByRole('searchbox', { name: 'Search titles' });
+    await userEvent.type(box, 'heron{Enter}');
+    await waitFor(() => expect(router.state.location.search).toBe('?q=heron'));
+    await userEvent.clear(box);
+    await userEvent.type(box, 'band{Enter}');
+    await waitFor(() => expect(router.state.location.search).toBe('?q=band'));
+    await router.navigate(-1);
+    await waitFor(() => expect(router.state.location.search).toBe('?q=heron'));
+    await waitFor(() => expect((box as HTMLInputElement).value).toBe('heron'));
+    await router.navigate(-1);
+    await waitFor(() => expect((box as HTMLInputElement).value).toBe(''));
+    await router.navigate(2);
+    await waitFor(() => expect((box as HTMLInputElement).value).toBe('band'));
+    // The box catching up with the URL starts no search of its own.
+    await new Promise((r) => setTimeout(r, 400));
+    expect(router.state.location.search).toBe('?q=band');
+    expect(api.sent.at(-1)!.url).toContain('q=band');
+  });
+
   it('reads sort and page from the URL, ignoring values the server would refuse', () => {
     expect(paramsFrom(new URLSearchParams('sort=title&page=2'))).toMatchObject({ sort: 'title', dir: 'asc', page: 2 });
     expect(paramsFrom(new URLSearchParams('sort=colour&dir=sideways&page=-3'))).toMatchObject({

@@ -44,6 +44,8 @@ export function LibraryPage() {
   const session = useSession();
   const [q, setQ] = useState(params.q);
   const change = (p: ListParams) => setSearch(toSearch(p));
+  // Back and forward change the URL under the box: the box shows what the list was searched for.
+  useEffect(() => setQ(params.q), [params.q]);
   // Search as the reader types, a moment after they stop.
   useEffect(() => {
     if (q === params.q) return;
@@ -53,12 +55,28 @@ export function LibraryPage() {
 
   return (
     <section aria-labelledby="library-title">
-      <div className="mb-4 flex flex-wrap items-end gap-4">
+      <div className="mb-4 flex flex-wrap items-center justify-between gap-x-6 gap-y-3">
         <h1 id="library-title">Library</h1>
-        <label className="ml-auto w-full sm:w-72">
-          <span className="label">Search titles</span>
-          <input className="input" type="search" value={q} onChange={(e) => setQ(e.target.value)} />
-        </label>
+        <form
+          role="search"
+          className="flex w-full items-center gap-2 sm:w-auto"
+          onSubmit={(e) => {
+            // Enter searches at once instead of waiting for the pause.
+            e.preventDefault();
+            if (q !== params.q) setSearch(toSearch({ ...params, q, page: 1 }));
+          }}
+        >
+          <label htmlFor="library-search" className="shrink-0 text-sm font-semibold">
+            Search titles
+          </label>
+          <input
+            id="library-search"
+            className="input min-w-0 flex-1 sm:w-72"
+            type="search"
+            value={q}
+            onChange={(e) => setQ(e.target.value)}
+          />
+        </form>
       </div>
       {list.isPending && <p role="status">Loading patterns…</p>}
       {list.isError && <QueryError error={list.error} retry={() => list.refetch()} />}
