@@ -54,7 +54,7 @@ export function similarColors(ast: PatternAst, threshold = DEFAULT_SIMILAR_COLOR
           `colour ${second.key} (${second.written}) is hard to tell from ${first.key} (${first.written}) on a chart: ` +
           `their CIEDE2000 distance is ${oneDecimal(d)}, below ${threshold}.`,
         range: second.colorRange,
-        hint: 'Pick a colour further from the other, or merge the two keys if they are the same bead.',
+        hint: 'pick a colour further from the other, or merge the two keys if they are the same bead',
       });
       // One warning per colour is enough to send the designer to the palette.
       break;
@@ -98,8 +98,8 @@ export function flatCircle(model: Model, ast: PatternAst): Diagnostic[] {
       range,
       hint:
         shape === 'cup'
-          ? "Add increases ('+') to this round if it should lie flat; leave it if a bowl or cup is meant."
-          : 'Use fewer increases in this round if it should lie flat; leave it if a ruffled edge is meant.',
+          ? "add increases ('+') to this round if it should lie flat; leave it if a bowl or cup is meant"
+          : 'use fewer increases in this round if it should lie flat; leave it if a ruffled edge is meant',
     });
   }
   return out;

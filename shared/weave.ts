@@ -216,7 +216,7 @@ class Builder {
           item.range,
           first || w.layout === 'tube'
             ? `end ${word} ${n} before this unit, or add units to ${word} ${below}`
-            : "Mark an increase with '+' if a new unit is meant here.",
+            : "mark an increase with '+' if a new unit is meant here",
         );
         return { row, complete: false };
       }
@@ -247,7 +247,7 @@ class Builder {
           'uncovered-base',
           `${word} ${n} leaves ${left} bead${left === 1 ? '' : 's'} of ${word} ${below} uncovered`,
           node.range,
-          "Build on them, or write '-' for each bead the row passes over.",
+          "build on them, or write '-' for each bead the row passes over",
         ),
       );
     }
