@@ -44,32 +44,43 @@ export interface ConvertSummary {
 // Compiled, the worker sits beside this file; from the TypeScript sources there is none to start.
 const workerFile = fileURLToPath(new URL('./worker.js', import.meta.url));
 
+/**
+ * `jobs` lanes pull files from one queue. This thread is one of them: its
+ * modules are loaded already, so it converts from the first moment while
+ * the worker threads (the other `jobs - 1` lanes) are still loading theirs.
+ * Each worker is handed two files at a time, so it has the next one ready
+ * while this thread is busy with its own file and not yet reading results.
+ */
 async function runAll(tasks: ConvertTask[], jobs: number, onResult: (r: FileResult) => void): Promise<FileResult[]> {
-  if (jobs > 1 && tasks.length > 1 && existsSync(workerFile)) {
-    const threads = Math.min(jobs, tasks.length);
-    const pool = new Piscina<ConvertTask, FileResult>({
-      filename: workerFile,
-      minThreads: threads,
-      maxThreads: threads,
-      idleTimeout: 1000,
-    });
-    try {
-      return await Promise.all(tasks.map((task) => pool.run(task).then((r) => (onResult(r), r))));
-    } finally {
-      await pool.destroy();
-    }
-  }
-  // In this thread, still `jobs` files at a time, so reads and writes overlap.
   const results: FileResult[] = new Array<FileResult>(tasks.length);
   let next = 0;
-  const lane = async (): Promise<void> => {
+  const lane = async (convert: (task: ConvertTask) => Promise<FileResult>): Promise<void> => {
     while (next < tasks.length) {
       const i = next++;
-      results[i] = await convertOne(tasks[i]!);
+      results[i] = await convert(tasks[i]!);
       onResult(results[i]);
     }
   };
-  await Promise.all(Array.from({ length: Math.max(1, Math.min(jobs, tasks.length)) }, lane));
+  const lanes = Math.max(1, Math.min(jobs, tasks.length));
+  const threads = existsSync(workerFile) ? lanes - 1 : 0;
+  if (threads === 0) {
+    // In this thread only, still `jobs` files at a time, so reads and writes overlap.
+    await Promise.all(Array.from({ length: lanes }, () => lane(convertOne)));
+    return results;
+  }
+  const pool = new Piscina<ConvertTask, FileResult>({
+    filename: workerFile,
+    minThreads: threads,
+    maxThreads: threads,
+    concurrentTasksPerWorker: 2,
+    idleTimeout: 1000,
+  });
+  try {
+    const inWorker = (task: ConvertTask): Promise<FileResult> => pool.run(task);
+    await Promise.all([lane(convertOne), ...Array.from({ length: 2 * threads }, () => lane(inWorker))]);
+  } finally {
+    await pool.destroy();
+  }
   return results;
 }
 

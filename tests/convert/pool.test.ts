@@ -29,7 +29,7 @@ afterAll(async () => {
   await rm(root, { recursive: true, force: true });
 });
 
-test('two worker threads give the same outputs as one thread', { timeout: 60_000 }, async () => {
+test('two jobs (this thread and a worker thread) give the same outputs as one thread', { timeout: 60_000 }, async () => {
   expect(existsSync(built), 'dist/ is missing: run npm run build:cli first').toBe(true);
   const { convertPaths: pooled } = (await import(pathToFileURL(built).href)) as { convertPaths: typeof convertPaths };
   const a = await pooled(['in'], { out: 'pool', cwd: root, jobs: 2 });
