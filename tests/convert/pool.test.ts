@@ -29,17 +29,21 @@ afterAll(async () => {
   await rm(root, { recursive: true, force: true });
 });
 
-test('two jobs (this thread and a worker thread) give the same outputs as one thread', { timeout: 60_000 }, async () => {
-  expect(existsSync(built), 'dist/ is missing: run npm run build:cli first').toBe(true);
-  const { convertPaths: pooled } = (await import(pathToFileURL(built).href)) as { convertPaths: typeof convertPaths };
-  const a = await pooled(['in'], { out: 'pool', cwd: root, jobs: 2 });
-  const b = await convertPaths(['in'], { out: 'single', cwd: root, jobs: 1 });
-  expect([a.converted, a.failed, a.exitCode]).toEqual([7, 1, 1]);
-  expect(a.files.map((f) => f.status)).toEqual(b.files.map((f) => f.status));
-  const files = (await readdir(join(root, 'pool'), { recursive: true }))
-    .filter((f) => /\.(svg|png|md|json)$/.test(f))
-    .sort();
-  expect(files).toHaveLength(8 * 4);
-  for (const f of files)
-    expect((await readFile(join(root, 'pool', f))).equals(await readFile(join(root, 'single', f))), f).toBe(true);
-});
+test(
+  'two jobs (this thread and a worker thread) give the same outputs as one thread',
+  { timeout: 60_000 },
+  async () => {
+    expect(existsSync(built), 'dist/ is missing: run npm run build:cli first').toBe(true);
+    const { convertPaths: pooled } = (await import(pathToFileURL(built).href)) as { convertPaths: typeof convertPaths };
+    const a = await pooled(['in'], { out: 'pool', cwd: root, jobs: 2 });
+    const b = await convertPaths(['in'], { out: 'single', cwd: root, jobs: 1 });
+    expect([a.converted, a.failed, a.exitCode]).toEqual([7, 1, 1]);
+    expect(a.files.map((f) => f.status)).toEqual(b.files.map((f) => f.status));
+    const files = (await readdir(join(root, 'pool'), { recursive: true }))
+      .filter((f) => /\.(svg|png|md|json)$/.test(f))
+      .sort();
+    expect(files).toHaveLength(8 * 4);
+    for (const f of files)
+      expect((await readFile(join(root, 'pool', f))).equals(await readFile(join(root, 'single', f))), f).toBe(true);
+  },
+);
