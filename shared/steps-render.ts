@@ -87,6 +87,7 @@ export function renderStepsText(doc: StepsDoc): string {
       out.push(`  ${unitHeading(step)}`, ...unitSentences(step, row.word).map((s) => `    ${s}`));
     }
   }
+  out.push('', 'Finishing:', `  ${doc.finish}`);
   return `${out.join('\n')}\n`;
 }
 
@@ -109,6 +110,7 @@ export function renderStepsMarkdown(doc: StepsDoc): string {
       out.push(`- **${md(unitHeading(step))}**`, ...unitSentences(step, row.word).map((s) => `  - ${md(s)}`));
     }
   }
+  out.push('', '## Finishing', '', md(doc.finish));
   return `${out.join('\n')}\n`;
 }
 
@@ -161,5 +163,6 @@ export function renderStepsHtml(doc: StepsDoc): string {
     }
     body.push('</ol>', '</section>');
   }
+  body.push('<h2>Finishing</h2>', `<p>${e(doc.finish)}</p>`);
   return htmlPage(doc.title, body);
 }

@@ -61,7 +61,18 @@ export interface StepsDoc {
   glossary: { term: string; meaning: string }[];
   notes: string[];
   rows: StepRow[];
+  /** How to end off once the last unit is done, the same words for every piece. */
+  finish: string;
 }
+
+/**
+ * Securing the ends, in plain words: common practice (from memory), the way
+ * beading books describe it, without the trade word "weave in".
+ */
+export const FINISH =
+  'When the last unit is done, take the needle back through the beads of a few units, ' +
+  'tie a small knot round the thread between two beads, pass on through a few more beads and cut the thread close. ' +
+  'Do the same with the tail left at the start.';
 
 type Heading = RowInfo['heading'];
 
@@ -222,5 +233,6 @@ export function buildSteps(model: Model): StepsDoc {
     glossary: glossary(model),
     notes: model.header.notes,
     rows: model.rows.map((r, i) => buildRow(ctx, r, stepOf, model.rows[i - 1])),
+    finish: FINISH,
   };
 }

@@ -75,6 +75,16 @@ describe('steps document on a hand-built strip', () => {
     expect(out.startsWith('# Two \\<Units\\> \\& Co\n')).toBe(true);
   });
 
+  it('ends with how to secure the thread and the starting tail, in every format', () => {
+    // common practice: end off by passing back through a few units, a knot between beads, then trimming.
+    expect(doc.finish).toMatch(/^When the last unit is done, take the needle back through/);
+    expect(doc.finish).toContain('tail left at the start');
+    const text = renderStepsText(doc);
+    expect(text.endsWith(`\nFinishing:\n  ${doc.finish}\n`)).toBe(true);
+    expect(renderStepsMarkdown(doc)).toContain(`## Finishing\n\n${doc.finish}\n`);
+    expect(renderStepsHtml(doc)).toContain(`<h2>Finishing</h2>\n<p>${doc.finish}</p>`);
+  });
+
   it('is plain JSON for --format json', () => {
     expect(JSON.parse(JSON.stringify(doc))).toEqual(doc);
     expect(doc.schema).toBe('fourfold.steps/1');
