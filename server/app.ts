@@ -4,7 +4,8 @@
  * pattern is visible to them (404).
  */
 import { existsSync } from 'node:fs';
-import { join } from 'node:path';
+import type { ServerResponse } from 'node:http';
+import { join, relative, sep } from 'node:path';
 import express, { Router, type Express } from 'express';
 import helmet from 'helmet';
 import type { AppDeps } from './context.js';
@@ -42,6 +43,19 @@ function apiRouter(deps: AppDeps): Router {
   return api;
 }
 
+/**
+ * Vite names every file under assets/ after its content, so those may be kept
+ * for good. index.html and the other unhashed files must be asked for again
+ * each time (a cheap 304 while unchanged): a page kept from the last deploy
+ * would point at assets that are gone.
+ */
+const cacheWebFile =
+  (webDir: string) =>
+  (res: ServerResponse, path: string): void => {
+    const hashed = relative(webDir, path).startsWith(`assets${sep}`);
+    res.setHeader('Cache-Control', hashed ? 'public, max-age=31536000, immutable' : 'no-cache');
+  };
+
 export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
@@ -72,10 +86,11 @@ export function createApp(deps: AppDeps): Express {
   app.use('/api', express.json({ limit: '2mb' }), apiRouter(deps));
   const { webDir } = deps;
   if (webDir && existsSync(join(webDir, 'index.html'))) {
-    app.use(express.static(webDir, { index: 'index.html', maxAge: '1h' }));
+    app.use(express.static(webDir, { index: 'index.html', setHeaders: cacheWebFile(webDir) }));
     // SPA fallback: any other GET that wants a page gets the app, which routes on the client.
+    // A missing asset stays a 404 (a script tag accepts */*, and HTML in its place would hide the fault).
     app.use((req, res, next) => {
-      if (req.method !== 'GET' || !req.accepts('html')) return next();
+      if (req.method !== 'GET' || req.path.startsWith('/assets/') || !req.accepts('html')) return next();
       res.setHeader('Cache-Control', 'no-cache');
       res.sendFile(join(webDir, 'index.html'));
     });

@@ -39,6 +39,25 @@ describe('web app and API together', () => {
     expect(missing.body.error.code).toBe('not-found');
   });
 
+  it('keeps hashed assets for good but has index.html asked for again, so a new deploy is seen at once', async () => {
+    const asset = await request(app).get('/assets/app.js').expect(200);
+    expect(asset.headers['cache-control']).toBe('public, max-age=31536000, immutable');
+    for (const path of ['/', '/index.html']) {
+      const page = await request(app).get(path).expect(200);
+      expect(page.text).toContain('<div id="root">');
+      expect(page.headers['cache-control']).toBe('no-cache');
+      // no-cache means "revalidate", which only pays off with a validator to revalidate against.
+      const again = await request(app).get(path).set('If-None-Match', page.headers.etag!);
+      expect(again.status).toBe(304);
+    }
+    const fallback = await request(app).get('/patterns/12').set('Accept', 'text/html').expect(200);
+    expect(fallback.headers['cache-control']).toBe('no-cache');
+    // An asset a stale page still names is gone: a 404, not the app's HTML in its place.
+    const gone = await request(app).get('/assets/app-old.js').set('Accept', '*/*');
+    expect(gone.status).toBe(404);
+    expect(gone.text).not.toContain('<div id="root">');
+  });
+
   it('applies a role change to the very next request', async () => {
     const admin = await login(h, 'admin@example.com');
     const token = await makeUser(h, admin, 'designer', 'promoted@example.com');
