@@ -58,7 +58,9 @@ export function reveal(box: Box, full: Box, p: Point): Box {
 /** Keep the view inside the chart, so a reader cannot lose it off the edge; a view larger than the chart centres it. */
 export function clamp(box: Box, full: Box): Box {
   const axis = (start: number, size: number, fullStart: number, fullSize: number) =>
-    size >= fullSize ? fullStart + (fullSize - size) / 2 : Math.min(fullStart + fullSize - size, Math.max(fullStart, start));
+    size >= fullSize
+      ? fullStart + (fullSize - size) / 2
+      : Math.min(fullStart + fullSize - size, Math.max(fullStart, start));
   return { ...box, x: axis(box.x, box.w, full.x, full.w), y: axis(box.y, box.h, full.y, full.h) };
 }
 
