@@ -7,7 +7,9 @@
 import { describe, expect, it } from 'vitest';
 import { formatHex, parse } from 'culori';
 import colors from 'tailwindcss/colors';
+import { color as oneDark } from '@codemirror/theme-one-dark';
 import { contrastRatio } from '../../shared/chart/contrast.js';
+import { FFP_COLORS } from '../../web/src/lib/ffp-language.js';
 
 function color(name: string): string {
   const [hue, shade] = name.split('-') as [string, string | undefined];
@@ -57,4 +59,37 @@ describe('text contrast', () => {
       expect(contrastRatio(color(text!), color(bg!))).toBeGreaterThanOrEqual(4.5);
     },
   );
+});
+
+// The editor's highlight colours are written out as hex; each must be the Tailwind shade it names.
+const FFP_SHADES = {
+  light: {
+    comment: 'slate-600',
+    key: 'teal-800',
+    row: 'violet-800',
+    number: 'blue-800',
+    color: 'rose-800',
+    mark: 'fuchsia-800',
+  },
+  dark: {
+    comment: 'slate-400',
+    key: 'teal-300',
+    row: 'violet-300',
+    number: 'blue-300',
+    color: 'rose-300',
+    mark: 'fuchsia-300',
+  },
+} as const;
+
+describe('editor highlighting contrast', () => {
+  // The light editor is white; the dark one has the one-dark theme's background, read from the package.
+  const backgrounds = { light: '#ffffff', dark: oneDark.background };
+  it.each(
+    (['light', 'dark'] as const).flatMap((theme) =>
+      Object.entries(FFP_COLORS[theme]).map(([part, hex]) => [theme, part, hex] as const),
+    ),
+  )('%s editor, %s (%s): the Tailwind shade it names, at least 4.5:1', (theme, part, hex) => {
+    expect(hex).toBe(color(FFP_SHADES[theme][part as keyof (typeof FFP_SHADES)['light']]));
+    expect(contrastRatio(hex, backgrounds[theme])).toBeGreaterThanOrEqual(4.5);
+  });
 });

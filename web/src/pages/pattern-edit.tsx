@@ -13,6 +13,7 @@ import { useCompiled } from '../lib/compiled.js';
 import { patternParams } from '../lib/route-params.js';
 import { useDark } from '../lib/use-dark.js';
 import { checkMarks, goTo, lineOffset, showChecks } from '../lib/editor-marks.js';
+import { ffpHighlighting } from '../lib/ffp-language.js';
 import { ChartView } from '../components/chart-view.js';
 import { DiagnosticList, countText } from '../components/diagnostic-list.js';
 import { FormError } from '../components/field.js';
@@ -102,7 +103,7 @@ function Editor({ detail }: { detail: PatternDetail }) {
                 onChange={setText}
                 height="60vh"
                 theme={dark ? 'dark' : 'light'}
-                extensions={[checkMarks, EditorView.contentAttributes.of({ 'aria-labelledby': 'editor-label' })]}
+                extensions={[ffpHighlighting(dark), checkMarks, EditorView.contentAttributes.of({ 'aria-labelledby': 'editor-label' })]}
                 basicSetup={{ lineNumbers: true, foldGutter: false, autocompletion: false }}
                 onCreateEditor={(v) => {
                   view.current = v;
