@@ -60,6 +60,13 @@ export function parseGrams(text: string): number {
   return g > 0 ? g : fail('Expected a pack size in grams above zero, like 5 or 7.5g.');
 }
 
+/** A CIEDE2000 distance, `8` or `2.5`: 0 (no warning) to 100 (about black to white). */
+export function parseColorDistance(text: string): number {
+  const m = /^(\d+(?:\.\d+)?)$/.exec(text.trim());
+  const n = m ? Number(m[1]) : NaN;
+  return n >= 0 && n <= 100 ? n : fail('Expected a colour distance from 0 (never warn) to 100, like 8.');
+}
+
 const CONVERT_FORMATS = ['svg', 'png', 'md', 'json'] as const;
 
 /** `svg,png` -> ['svg', 'png'], each checked, no repeats. */
@@ -126,6 +133,13 @@ function define(program: Command, done: (cmd: ParsedCommand) => void): void {
 
   command('check', 'parse and simulate patterns; print every problem found, render nothing')
     .argument('<files...>', "pattern files ('-' reads standard input)")
+    .addOption(
+      // No commander default: absent means the design's threshold, which lives with the check.
+      new Option(
+        '--similar-colors <distance>',
+        'warn when two colours are closer than this CIEDE2000 distance (default: 8; 0 never warns)',
+      ).argParser(parseColorDistance),
+    )
     .addOption(formatOption(['text', 'json'], 'text'))
     .action(finish('check'));
 

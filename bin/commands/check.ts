@@ -4,7 +4,7 @@
  * over the batch: 2 (a file could not be read) wins over 1 (a file has errors).
  */
 import { compile } from '../../shared/compile.js';
-import { materialChecks } from '../../shared/color-checks.js';
+import { materialChecks, type MaterialCheckOptions } from '../../shared/color-checks.js';
 import { fileStart, hasErrors, sortDiagnostics, type Diagnostic } from '../../shared/diagnostic.js';
 import { EXIT_FAILURE, EXIT_OK, EXIT_PATTERN_ERRORS, type CliIO, type ParsedCommand } from '../command.js';
 import { displayName, printDiagnostics, readPattern } from '../read-input.js';
@@ -40,13 +40,15 @@ export function checkJson(files: readonly CheckedFile[]): string {
 }
 
 /** Every diagnostic a pattern earns, in one sorted list. */
-export function checkText(text: string): Diagnostic[] {
+export function checkText(text: string, options: MaterialCheckOptions = {}): Diagnostic[] {
   const compiled = compile(text);
-  return sortDiagnostics([...compiled.diagnostics, ...materialChecks(compiled.value)]);
+  return sortDiagnostics([...compiled.diagnostics, ...materialChecks(compiled.value, options)]);
 }
 
 export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
   const json = cmd.options.format === 'json';
+  const similar = cmd.options.similarColors;
+  const checks: MaterialCheckOptions = typeof similar === 'number' ? { similarColors: similar } : {};
   const files: CheckedFile[] = [];
   let exit = EXIT_OK;
   for (const path of cmd.operands) {
@@ -62,7 +64,7 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
     }
     const diagnostics = sortDiagnostics([
       ...input.diagnostics,
-      ...(input.diagnostics.length ? [] : checkText(input.text)),
+      ...(input.diagnostics.length ? [] : checkText(input.text, checks)),
     ]);
     const ok = !hasErrors(diagnostics);
     if (!ok && exit === EXIT_OK) exit = EXIT_PATTERN_ERRORS;

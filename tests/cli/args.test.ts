@@ -63,6 +63,13 @@ describe('parseArgs: each command', () => {
     expect(usageError('check', 'a', '--format', 'xml')).toContain('Allowed choices are text, json');
   });
 
+  it('check --similar-colors takes a CIEDE2000 distance from 0 to 100', () => {
+    expect(ok('check', 'a.ffp', '--similar-colors', '2.5').options).toEqual({ format: 'text', similarColors: 2.5 });
+    expect(ok('check', 'a.ffp', '--similar-colors', '0').options.similarColors).toBe(0);
+    expect(usageError('check', 'a.ffp', '--similar-colors', '101')).toContain('Expected a colour distance from 0');
+    expect(usageError('check', 'a.ffp', '--similar-colors', 'near')).toContain('Expected a colour distance from 0');
+  });
+
   it('chart: output, png, dpi, scale, numbers, thread, theme, strict', () => {
     expect(ok('chart', 'a.ffp').options).toEqual({ dpi: 192, scale: 'screen', theme: 'light', format: 'svg' });
     const c = ok(

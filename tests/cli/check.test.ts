@@ -122,6 +122,20 @@ describe('fourfold check', () => {
     expect(ids).toEqual(['2:1:unknown-key', '10:12:bead-count', '11:5:row-number', '11:16:unknown-color']);
   });
 
+  it('--similar-colors moves the threshold of the similar-colors warning', async () => {
+    // Two blues 2.07 apart in CIEDE2000 (culori's differenceCiede2000, the library the engine uses).
+    const pattern = 'title: Blues\ncolors:\n  A #2e6f8e\n  B #2a6b8e\nrow 1: AAAA BBB\n';
+    const ids = async (args: string[]) => {
+      const io = fakeIO({ cwd: fixtures, stdin: pattern });
+      const code = await main(['check', '-', '--format', 'json', ...args], io);
+      const json = JSON.parse(io.out()) as CheckJson;
+      return { code, ids: json.files[0]!.diagnostics.map((d) => d.id) };
+    };
+    expect(await ids([])).toEqual({ code: 0, ids: ['similar-colors'] });
+    expect(await ids(['--similar-colors', '1'])).toEqual({ code: 0, ids: [] });
+    expect(await ids(['--similar-colors', '0'])).toEqual({ code: 0, ids: [] });
+  });
+
   it('in a batch, an unreadable file (2) wins over a pattern error (1)', async () => {
     const { code, json, err } = await checkJson(['broken.ffp', 'no-such.ffp', 'strip.ffp']);
     expect(code).toBe(2);
