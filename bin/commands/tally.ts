@@ -19,11 +19,18 @@ import {
 import { EXIT_FAILURE, EXIT_OK, EXIT_PATTERN_ERRORS, useColor, type CliIO, type ParsedCommand } from '../command.js';
 import { compilePattern } from '../read-input.js';
 
+/** What each command that needs an error-free pattern would have printed. */
+const PRODUCT: Record<string, string> = { tally: 'tally', steps: 'steps', kit: 'kit sheet' };
+
 /** The model of the one operand, or the exit code to return when there is none to use. */
 export async function loadModel(cmd: ParsedCommand, io: CliIO): Promise<Model | number> {
   const compiled = await compilePattern(cmd.operands[0]!, io);
   if (typeof compiled === 'number') return compiled;
-  return hasErrors(compiled.diagnostics) ? EXIT_PATTERN_ERRORS : compiled.value.model;
+  if (!hasErrors(compiled.diagnostics)) return compiled.value.model;
+  // After a screen of diagnostics, one line says why standard output stayed empty.
+  const what = PRODUCT[cmd.name] ?? cmd.name;
+  io.stderr.write(`fourfold: no ${what} for '${compiled.file}': fix the errors above first\n`);
+  return EXIT_PATTERN_ERRORS;
 }
 
 export type MaterialOptions = Required<Omit<TallyOptions, 'packGrams' | 'beadsPerGram'>> &

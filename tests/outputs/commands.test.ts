@@ -87,6 +87,21 @@ describe('fourfold tally', () => {
     expect(out).toBe('');
     expect(err).toContain('bead-count');
   });
+
+  it('closes the diagnostics of a broken pattern with one line saying nothing was printed, for steps and kit too', async () => {
+    const broken = PATTERN.replace('BA +AAA\nrow 3', 'BAA +AAA\nrow 3');
+    const cases: [CommandModule, string, string][] = [
+      [tallyCmd, 'tally', 'tally'],
+      [steps, 'steps', 'steps'],
+      [kit, 'kit', 'kit sheet'],
+    ];
+    for (const [mod, name, what] of cases) {
+      const { code, out, err } = await run(mod, [name, '-'], broken);
+      expect(code).toBe(1);
+      expect(out).toBe('');
+      expect(err.endsWith(`fourfold: no ${what} for '<stdin>': fix the errors above first\n`)).toBe(true);
+    }
+  });
 });
 
 describe('fourfold steps', () => {
