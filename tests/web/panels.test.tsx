@@ -1,5 +1,5 @@
 import { describe, expect, it, vi } from 'vitest';
-import { screen, waitFor } from '@testing-library/react';
+import { cleanup, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { FeedbackPanel } from '../../web/src/components/feedback-panel.js';
 import { SharingPanel } from '../../web/src/components/sharing-panel.js';
@@ -48,6 +48,41 @@ describe('notes', () => {
     await waitFor(() => expect(api.sent.some((r) => r.method === 'PATCH')).toBe(true));
     expect(api.sent.find((r) => r.method === 'PATCH')!.body).toEqual({ status: 'resolved' });
     expect(screen.queryByRole('textbox', { name: 'Note' })).toBeNull();
+  });
+
+  it('asks for the notes of the version shown, one cache entry per version, and marks those written on an older one', async () => {
+    // docs/server.md: GET feedback?version=N gives the notes whose place that version still has.
+    const byVersion: Record<string, FeedbackNote[]> = {
+      '1': [note({ id: 7, version: 1, text: 'Only on the first version.' })],
+      '2': [note({ id: 8, version: 2, text: 'Written on the second.' }), note({ id: 9, version: 1, row: 1 })],
+    };
+    const api = mockApi({
+      'GET /api/patterns/4/feedback': (req) => ({
+        json: { items: byVersion[new URL(req.url, 'http://x').searchParams.get('version') ?? ''] ?? [] },
+      }),
+    });
+    const panel = (version: number) => (
+      <FeedbackPanel
+        patternId={4}
+        version={version}
+        picked={{ row: 1, unit: 1 }}
+        canWrite={false}
+        canResolve={false}
+        onShow={() => {}}
+      />
+    );
+    renderWithApp(panel(1));
+    await screen.findByText('Only on the first version.');
+    expect(screen.queryByText(/written on version/)).toBeNull();
+    cleanup();
+    renderWithApp(panel(2));
+    await screen.findByText('Written on the second.');
+    expect(screen.queryByText('Only on the first version.')).toBeNull();
+    expect(screen.getAllByText(/written on version 1/)).toHaveLength(1);
+    expect(api.sent.map((r) => r.url)).toEqual([
+      '/api/patterns/4/feedback?version=1',
+      '/api/patterns/4/feedback?version=2',
+    ]);
   });
 
   it('writes a note on the picked unit, or on the whole row', async () => {

@@ -21,7 +21,7 @@ export function FeedbackPanel(props: {
   canResolve: boolean;
   onShow(place: StepPlace): void;
 }) {
-  const notes = useQuery(feedbackQuery(props.patternId));
+  const notes = useQuery(feedbackQuery(props.patternId, props.version));
   const add = useAddNote(props.patternId);
   const resolve = useResolveNote(props.patternId);
   const [text, setText] = useState('');

@@ -52,9 +52,9 @@ function PatternBody({ detail, version }: { detail: PatternDetail; version?: num
   const savePlace = useSavePlace(detail.id);
   const [place, setPlace] = usePlace(model, saved.data, keepsPlace ? (p) => savePlace.mutate(p) : undefined);
   const tally = useQuery(tallyQuery(detail.id, version));
-  const notes = useQuery(feedbackQuery(detail.id));
   const remove = useDeletePattern(detail.id);
   const viewing = detail.viewing.version;
+  const notes = useQuery(feedbackQuery(detail.id, viewing));
   const [line, setLine] = useState<number | undefined>();
   const noted = useMemo(
     () =>
