@@ -47,13 +47,15 @@ export function beads(model: Model, t: PageTransform, theme: Theme): BeadPrim[] 
     const centre = toPage(t, bead);
     const length = round2(bead.length * t.scale);
     const unit = model.units[bead.units[0] ?? 0];
-    const prim: BeadPrim = {
+    const x = round2(centre.x);
+    // The label is in the literal, even when absent: added afterwards, it would give every bead a second object to hold it.
+    return {
       kind: 'bead',
       id: `ff-bead-${bead.id}`,
       bead: bead.id,
       unit: unit?.id ?? 0,
       row: unit?.row ?? 0,
-      x: round2(centre.x),
+      x,
       y: round2(centre.y),
       // The model turns counter-clockwise with y up; the page has y down.
       angle: round2(-bead.angle),
@@ -63,18 +65,12 @@ export function beads(model: Model, t: PageTransform, theme: Theme): BeadPrim[] 
       stroke: theme.beadStroke,
       strokeWidth: theme.beadStrokeWidth,
       gap: bead.gap === true,
+      // A letter needs about one em along the bead; gap beads are often shorter.
+      label:
+        length >= thickness * 1.3
+          ? { text: bead.color, color: ink.get(fill)!, size, x, y: round2(centre.y + (size * CAP_HEIGHT) / 2) }
+          : undefined,
     };
-    // A letter needs about one em along the bead; gap beads are often shorter.
-    if (length >= thickness * 1.3) {
-      prim.label = {
-        text: bead.color,
-        color: ink.get(fill)!,
-        size,
-        x: prim.x,
-        y: round2(centre.y + (size * CAP_HEIGHT) / 2),
-      };
-    }
-    return prim;
   };
   // Gap beads go last: they are short and sit where other beads' ends meet, which would hide them.
   const out: BeadPrim[] = [];
