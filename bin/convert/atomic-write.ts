@@ -8,10 +8,14 @@ import { mkdir, rename, rm, writeFile } from 'node:fs/promises';
 import { dirname } from 'node:path';
 
 export async function writeFileAtomic(path: string, data: string | Uint8Array): Promise<void> {
-  await mkdir(dirname(path), { recursive: true });
   const temp = `${path}.${process.pid}-${randomBytes(4).toString('hex')}.tmp`;
   try {
-    await writeFile(temp, data);
+    // The folder is made only when it is missing: in a batch, nearly every file goes to a folder that exists.
+    await writeFile(temp, data).catch(async (error: NodeJS.ErrnoException) => {
+      if (error.code !== 'ENOENT') throw error;
+      await mkdir(dirname(path), { recursive: true });
+      await writeFile(temp, data);
+    });
     await rename(temp, path);
   } catch (error) {
     await rm(temp, { force: true });
