@@ -1,7 +1,8 @@
 /**
- * The library page: one hand-written query for the rows of a page and one
- * for the total. It is the most requested read, so it skips the ORM's
- * instance building; every value still goes in as a bound parameter.
+ * The library page: one hand-written query that brings the rows of a page
+ * and the total together (a second query only for a page past the end). It
+ * is the most requested read, so it skips the ORM's instance building and
+ * makes one round trip; every value still goes in as a bound parameter.
  */
 import { QueryTypes } from 'sequelize';
 import type { AuthContext } from './auth.js';
@@ -34,6 +35,7 @@ interface Row {
   ownerName: string;
   links: number | bigint;
   testers: number | bigint;
+  total: number | bigint;
 }
 
 const SORT_COLUMN = { updated: 'p.updatedAt', title: 'p.title', beads: 'p.beads' } as const;
@@ -52,8 +54,10 @@ export async function listPatterns(db: Db, ctx: AuthContext, query: LibraryQuery
   const where = [seen.sql, ...(query.q ? ['p.title LIKE ?'] : [])].join(' AND ');
   const params = [...seen.params, ...(query.q ? [`%${likeEscape(query.q)}%`] : [])];
   const dir = (query.dir ?? (query.sort === 'title' ? 'asc' : 'desc')) === 'asc' ? 'ASC' : 'DESC';
+  const count = `SELECT COUNT(*) AS n FROM patterns p WHERE ${where}`;
+  // The total is an uncorrelated subquery, which the server works out once per query, not once per row.
   const page = `
-    SELECT p.id, p.title, p.layout, p.rows, p.units, p.beads, p.colors, p.currentVersion, p.errors, p.warnings,
+    SELECT (${count}) AS total, p.id, p.title, p.layout, p.rows, p.units, p.beads, p.colors, p.currentVersion, p.errors, p.warnings,
            p.createdAt, p.updatedAt, p.ownerId, u.name AS ownerName,
            (SELECT COUNT(*) FROM share_links s WHERE s.patternId = p.id AND s.revokedAt IS NULL
               AND (s.expiresAt IS NULL OR s.expiresAt > UTC_TIMESTAMP())) AS links,
@@ -63,18 +67,20 @@ export async function listPatterns(db: Db, ctx: AuthContext, query: LibraryQuery
     WHERE ${where}
     ORDER BY ${SORT_COLUMN[query.sort]} ${dir}, p.id ${dir}
     LIMIT ? OFFSET ?`;
-  const [rows, counted] = await Promise.all([
-    db.sequelize.query<Row>(page, {
-      replacements: [...params, query.pageSize, (query.page - 1) * query.pageSize],
-      type: QueryTypes.SELECT,
-      raw: true,
-    }),
-    db.sequelize.query<{ n: number | bigint }>(`SELECT COUNT(*) AS n FROM patterns p WHERE ${where}`, {
-      replacements: params,
-      type: QueryTypes.SELECT,
-      raw: true,
-    }),
-  ]);
+  const rows = await db.sequelize.query<Row>(page, {
+    replacements: [...params, ...params, query.pageSize, (query.page - 1) * query.pageSize],
+    type: QueryTypes.SELECT,
+    raw: true,
+  });
+  const total = rows[0]
+    ? rows[0].total
+    : (
+        await db.sequelize.query<{ n: number | bigint }>(count, {
+          replacements: params,
+          type: QueryTypes.SELECT,
+          raw: true,
+        })
+      )[0]?.n;
   const items = rows.map((r) =>
     toSummary(
       {
@@ -85,7 +91,7 @@ export async function listPatterns(db: Db, ctx: AuthContext, query: LibraryQuery
       { links: Number(r.links), testers: Number(r.testers) },
     ),
   );
-  return { items, total: Number(counted[0]?.n ?? 0), page: query.page, pageSize: query.pageSize };
+  return { items, total: Number(total ?? 0), page: query.page, pageSize: query.pageSize };
 }
 
 /**

@@ -151,6 +151,13 @@ describe('versions', () => {
     expect(paged.body.items.map((p: { title: string }) => p.title)).toEqual(['Cobalt Cuff']);
     const searched = await as(lister, request(h.app).get(`/api/patterns?q=${encodeURIComponent('100%')}`)).expect(200);
     expect(searched.body.items.map((p: { title: string }) => p.title)).toEqual(['amber 100% Band']);
+    // The total counts what the search matches, not every pattern of the owner, on a full page and past the end.
+    const band = await as(lister, request(h.app).get('/api/patterns?q=b&sort=title&pageSize=1')).expect(200);
+    expect(band.body).toMatchObject({ total: 3, page: 1, pageSize: 1 });
+    const strips = await as(lister, request(h.app).get('/api/patterns?q=strip')).expect(200);
+    expect(strips.body).toMatchObject({ total: 1, items: [{ title: 'Birch Strip' }] });
+    const past = await as(lister, request(h.app).get('/api/patterns?q=strip&page=3')).expect(200);
+    expect(past.body).toMatchObject({ total: 1, page: 3, items: [] });
     await as(lister, request(h.app).get('/api/patterns?pageSize=1000')).expect(400);
   });
 });
