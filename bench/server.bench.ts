@@ -71,7 +71,7 @@ const bench: Bench = {
   async run() {
     const dataDir = await mkdtemp(join(tmpdir(), 'fourfold-bench-db-'));
     const database = await openDatabase(process.env, dataDir);
-    const db = connect(database.url, { poolMax: 20 });
+    const db = connect(database.url, { poolMax: 20, socketPath: database.socket });
     const mailer = await createMailer({ from: 'bench@fourfold.invalid' });
     try {
       await migrate(db.sequelize);

@@ -45,7 +45,7 @@ export async function startServer(options: ServeOptions): Promise<Running> {
     while (stack.length) await stack.pop()!().catch((error: unknown) => log(`while stopping: ${String(error)}`));
   };
   try {
-    const db = connect(database.url);
+    const db = connect(database.url, { socketPath: database.socket });
     stack.push(() => db.close());
     stack.push(closeEngine);
     const applied = await migrate(db.sequelize);
