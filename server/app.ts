@@ -6,7 +6,7 @@
 import { existsSync } from 'node:fs';
 import type { ServerResponse } from 'node:http';
 import { join, relative, sep } from 'node:path';
-import express, { Router, type Express } from 'express';
+import express, { Router, type Express, type RequestHandler } from 'express';
 import helmet from 'helmet';
 import type { AppDeps } from './context.js';
 import { allow, bearer } from './auth.js';
@@ -24,12 +24,17 @@ import { sharedRoutes, viewRoutes } from './routes/views.js';
 function apiRouter(deps: AppDeps): Router {
   const api = Router();
   const render = cachedRenderer();
-  api.get('/health', (_req, res) => {
+  const signedIn = bearer(deps.db.models);
+  // Given a token, health checks it like any route (the sign-in path and the database behind it), so a
+  // monitor that sends one sees sign-in trouble and health costs what every request costs; without one it answers anyway.
+  const tokenIfGiven: RequestHandler = (req, res, next) =>
+    req.headers.authorization === undefined ? next() : signedIn(req, res, next);
+  api.get('/health', tokenIfGiven, (_req, res) => {
     res.json({ ok: true });
   });
   api.use('/auth', authRoutes(deps));
   api.use('/shared', sharedRoutes(deps, render));
-  api.use(bearer(deps.db.models));
+  api.use(signedIn);
   api.use('/check', checkRoutes(deps));
   api.use('/patterns', patternRoutes(deps), viewRoutes(deps, render), sharingRoutes(deps), feedbackRoutes(deps));
   api.use('/tokens', tokenRoutes(deps));

@@ -214,4 +214,11 @@ describe('sign-in and passwords', () => {
     expect(csp).toContain("object-src 'none'");
     expect(csp).toContain("frame-ancestors 'none'");
   });
+
+  it('answers health without a token, and checks a token when one is sent', async () => {
+    expect((await request(h.app).get('/api/health').expect(200)).body).toEqual({ ok: true });
+    expect((await as(owner, request(h.app).get('/api/health')).expect(200)).body).toEqual({ ok: true });
+    const stale = await as('x'.repeat(43), request(h.app).get('/api/health')).expect(401);
+    expect(stale.body.error.code).toBe('unauthenticated');
+  });
 });
