@@ -31,7 +31,7 @@ function moveSentence(move: StepMove, isLast: boolean): string {
 const MARK_WORDS: Record<StepUnit['mark'], string> = { '': '', '*': 'fresh ring', '+': 'increase' };
 
 export function unitHeading(step: StepUnit): string {
-  const extras = [MARK_WORDS[step.mark], step.cue].filter(Boolean);
+  const extras = [MARK_WORDS[step.mark], step.closes ? 'joins up with unit 1' : '', step.cue].filter(Boolean);
   return `Unit ${step.number}${extras.length ? ` (${extras.join('; ')})` : ''}`;
 }
 

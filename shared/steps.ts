@@ -27,6 +27,8 @@ export interface StepUnit {
   mark: '' | '*' | '+';
   /** Where the first new bead goes; only when the new beads are not all one colour. */
   cue?: string;
+  /** The last unit of a tube's or a round's row, which joins the row up with its first unit. */
+  closes?: true;
   /** Going round the unit: pick up, then pass through to close it. */
   round: StepMove[];
   /** Beads to pass through to reach the next unit, in the next row too (empty when the thread is already there). */
@@ -195,6 +197,7 @@ function buildRow(ctx: Ctx, row: RowInfo, stepOf: Map<number, UnitStep>, below?:
       unit: id,
       mark: unit.mark,
       ...(cue ? { cue } : {}),
+      ...(model.layout.kind !== 'flat' && i === row.units.length - 1 && i > 0 ? { closes: true as const } : {}),
       round: step ? roundMoves(ctx, step, row.heading) : [],
       moveOn: (step?.moveOn ?? []).map((b) => beadRef(ctx, b, locate(ctx, b, unit, next))),
       sideBeads: sides.size,

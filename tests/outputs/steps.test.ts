@@ -1,7 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { XMLValidator } from 'fast-xml-parser';
 import { buildSteps } from '../../shared/steps.js';
-import { renderStepsHtml, renderStepsMarkdown, renderStepsText, rowHeading } from '../../shared/steps-render.js';
+import {
+  renderStepsHtml,
+  renderStepsMarkdown,
+  renderStepsText,
+  rowHeading,
+  unitHeading,
+} from '../../shared/steps-render.js';
 import { compile } from '../../shared/compile.js';
 import { tally } from '../../shared/tally.js';
 import { stripModel } from './fixture-strip.js';
@@ -88,6 +94,22 @@ describe('steps document on a hand-built strip', () => {
   it('is plain JSON for --format json', () => {
     expect(JSON.parse(JSON.stringify(doc))).toEqual(doc);
     expect(doc.schema).toBe('fourfold.steps/1');
+  });
+});
+
+describe('the unit that closes a round', () => {
+  it('is named in the heading of the last unit of every row of a tube, and nowhere in a flat piece', () => {
+    const tube = compile('title: T\nlayout: tube\ncolors:\n  A red\nround 1: AAAA AAA AAA AA\nround 2: AAA AA AA A\n');
+    const doc = buildSteps(tube.value.model);
+    for (const row of doc.rows) {
+      expect(row.steps.map((s) => s.closes === true)).toEqual([false, false, false, true]);
+      expect(unitHeading(row.steps[3]!)).toMatch(/^Unit 4 \(joins up with unit 1/);
+    }
+    expect(
+      buildSteps(stripModel())
+        .rows.flatMap((r) => r.steps)
+        .some((s) => s.closes),
+    ).toBe(false);
   });
 });
 
