@@ -40,8 +40,8 @@ const REASONS: Record<string, string> = {
   ENOTDIR: 'a part of the path is not a folder',
   ENAMETOOLONG: 'the name is too long',
   ELOOP: 'too many symbolic links',
-  // Creating a missing folder on the way to a file that is in fact a file.
-  EEXIST: 'a part of the path is a file, not a folder',
+  // Creating a missing folder where a file of that name stands: ENOTDIR in other words.
+  EEXIST: 'a part of the path is not a folder',
   ENOSPC: 'the disk is full',
   EROFS: 'the disk is read-only',
 };

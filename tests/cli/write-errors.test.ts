@@ -19,13 +19,15 @@ describe('an output that cannot be written', () => {
     const code = await main(['chart', 'strip.ffp', '-o', join(blocker, 'strip.svg')], io);
     expect(code).toBe(2);
     expect(io.err()).toBe(
-      `fourfold: cannot write '${join(blocker, 'strip.svg')}': a part of the path is a file, not a folder\n`,
+      `fourfold: cannot write '${join(blocker, 'strip.svg')}': a part of the path is not a folder\n`,
     );
     expect(io.out()).toBe('');
   });
 
   it('names the usual failures in words and keeps the message of anything else', () => {
     expect(ioReason({ code: 'ENOSPC' })).toBe('the disk is full');
+    // mkdir meets a file where a folder should be: EEXIST or ENOTDIR, by platform and path; one wording.
+    expect(ioReason({ code: 'EEXIST' })).toBe(ioReason({ code: 'ENOTDIR' }));
     expect(ioReason({ code: 'EROFS' })).toBe('the disk is read-only');
     expect(ioReason(new Error('something odd'))).toBe('something odd');
   });
