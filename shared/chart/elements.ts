@@ -13,6 +13,7 @@ import type {
   PathPrim,
   Primitive,
   RectPrim,
+  Role,
   Scene,
   TextPrim,
 } from './scene-types.js';
@@ -47,7 +48,19 @@ export interface EmbeddedFont {
 }
 
 const DATA_NAMES = ['data-unit', 'data-row', 'data-pass', 'data-kind', 'data-key'] as const;
-const dataValues = (d: DataAttrs): AttrValue[] => [d.unit, d.row, d.pass, d.kind, d.key];
+/** `values` with the data attributes' values after them, in DATA_NAMES order; no second array. */
+const withData = (values: AttrValue[], d: DataAttrs): AttrValue[] => {
+  values.push(d.unit, d.row, d.pass, d.kind, d.key);
+  return values;
+};
+
+/** `ff-<role>`, made once per role rather than once per element. */
+const classes = new Map<Role, string>();
+const classOf = (role: Role): string => {
+  let c = classes.get(role);
+  if (c === undefined) classes.set(role, (c = `ff-${role}`));
+  return c;
+};
 
 type TextFields = Pick<TextPrim, 'id' | 'x' | 'y' | 'size' | 'text' | 'color' | 'anchor' | 'bold'>;
 
@@ -64,8 +77,7 @@ function text(sink: SvgSink, p: TextFields, cls: string, data: DataAttrs | null)
     p.anchor === 'start' ? undefined : p.anchor,
     p.bold ? 'bold' : undefined,
   ];
-  if (data) values.push(data.unit, data.row, data.pass, data.kind, data.key);
-  sink.element('text', TEXT_NAMES, values, p.text);
+  sink.element('text', TEXT_NAMES, data ? withData(values, data) : values, p.text);
 }
 
 const BEAD_NAMES = [
@@ -127,9 +139,9 @@ const RECT_NAMES = ['id', 'class', 'x', 'y', 'width', 'height', 'fill', 'stroke'
 function rect(sink: SvgSink, p: RectPrim): void {
   const fill = typeof p.fill === 'string' ? p.fill : `url(#${p.fill.pattern})`;
   const stroke = p.stroke ?? undefined;
-  sink.element('rect', RECT_NAMES, [
+  const values: AttrValue[] = [
     p.id,
-    `ff-${p.role}`,
+    classOf(p.role),
     p.x,
     p.y,
     p.width,
@@ -137,8 +149,8 @@ function rect(sink: SvgSink, p: RectPrim): void {
     fill,
     stroke,
     stroke === undefined ? undefined : p.strokeWidth,
-    ...dataValues(p.data),
-  ]);
+  ];
+  sink.element('rect', RECT_NAMES, withData(values, p.data));
 }
 
 const PATH_NAMES = [
@@ -155,17 +167,17 @@ const PATH_NAMES = [
 
 function path(sink: SvgSink, p: PathPrim): void {
   const stroke = p.stroke ?? undefined;
-  sink.element('path', PATH_NAMES, [
+  const values: AttrValue[] = [
     p.id,
-    `ff-${p.role}`,
+    classOf(p.role),
     p.d,
     p.fill ?? 'none',
     stroke,
     stroke === undefined ? undefined : p.strokeWidth,
     p.dash,
     stroke !== undefined && p.fill === null ? 'round' : undefined,
-    ...dataValues(p.data),
-  ]);
+  ];
+  sink.element('path', PATH_NAMES, withData(values, p.data));
 }
 
 function primitive(sink: SvgSink, p: Primitive): void {
@@ -173,7 +185,7 @@ function primitive(sink: SvgSink, p: Primitive): void {
     case 'bead':
       return bead(sink, p);
     case 'text':
-      return text(sink, p, `ff-${p.role}`, p.data);
+      return text(sink, p, classOf(p.role), p.data);
     case 'rect':
       return rect(sink, p);
     case 'path':

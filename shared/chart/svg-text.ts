@@ -63,7 +63,10 @@ class TextSink implements SvgSink {
   length = 0;
 
   private room(n: number): void {
-    if (this.length + n <= this.bytes.length) return;
+    if (this.length + n > this.bytes.length) this.grow(n);
+  }
+
+  private grow(n: number): void {
     const grown = new Uint8Array(Math.max(this.bytes.length * 2, this.length + n));
     grown.set(this.bytes.subarray(0, this.length));
     this.bytes = grown;
