@@ -97,6 +97,49 @@ describe('chart view', () => {
     });
   });
 
+  it('picks the current unit with Enter on the chart, for a reader without a pointer', async () => {
+    const model = modelOf(panel);
+    const onPick = vi.fn();
+    const current = model.rows[1]!.units[0]!;
+    render(<ChartView model={model} dark={false} current={current} onPick={onPick} />);
+    screen.getByTestId('chart').focus();
+    await userEvent.keyboard('{Enter}');
+    expect(onPick).toHaveBeenCalledWith(current);
+  });
+
+  it('zooms with two fingers round their middle, and picks nothing when they lift', () => {
+    // jsdom lays nothing out: the chart is given a 200 x 100 px box at the page's corner.
+    vi.spyOn(Element.prototype, 'getBoundingClientRect').mockReturnValue(new DOMRect(0, 0, 200, 100));
+    // jsdom has no PointerEvent; without one every pointer would have the same (absent) id.
+    class TouchPointer extends MouseEvent {
+      readonly pointerId: number;
+      constructor(type: string, init: PointerEventInit = {}) {
+        super(type, init);
+        this.pointerId = init.pointerId ?? 0;
+      }
+    }
+    vi.stubGlobal('PointerEvent', TouchPointer);
+    const model = modelOf(panel);
+    const onPick = vi.fn();
+    const { container } = render(<ChartView model={model} dark={false} onPick={onPick} />);
+    const svg = container.querySelector('svg')!;
+    const before = svg.getAttribute('viewBox')!.split(' ').map(Number) as [number, number, number, number];
+    const bead = container.querySelector('[data-bead]')!;
+    fireEvent.pointerDown(bead, { pointerId: 1, clientX: 50, clientY: 50 });
+    fireEvent.pointerDown(bead, { pointerId: 2, clientX: 150, clientY: 50 });
+    // The fingers spread from 100 to 200 px apart: twice the zoom.
+    fireEvent.pointerMove(bead, { pointerId: 2, clientX: 250, clientY: 50 });
+    const after = svg.getAttribute('viewBox')!.split(' ').map(Number) as [number, number, number, number];
+    expect(after[2]).toBeCloseTo(before[2] / 2, 5);
+    // The middle between the fingers (100 px across, half the box) stays where it was on the chart.
+    const middle = before[0] + 0.5 * before[2];
+    expect(after[0] + 0.5 * after[2]).toBeCloseTo(middle, 5);
+    fireEvent.pointerUp(bead, { pointerId: 2, clientX: 250, clientY: 50 });
+    fireEvent.pointerUp(bead, { pointerId: 1, clientX: 50, clientY: 50 });
+    expect(onPick).not.toHaveBeenCalled();
+    vi.restoreAllMocks();
+  });
+
   it('tells where a bead sits in each unit that holds it, and its colour', () => {
     const model = modelOf(panel);
     const shared = model.beads.find((b) => b.units.length === 2)!;

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { describe, expect, it, vi } from 'vitest';
 import { cleanup, screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
@@ -5,6 +6,7 @@ import { FeedbackPanel } from '../../web/src/components/feedback-panel.js';
 import { SharingPanel } from '../../web/src/components/sharing-panel.js';
 import { countChanges } from '../../web/src/components/versions-panel.js';
 import type { FeedbackNote, TallyJson } from '../../web/src/api/types.js';
+import type { StepPlace } from '../../web/src/lib/stepper.js';
 import { mockApi, renderWithApp } from './helpers.js';
 
 const note = (over: Partial<FeedbackNote>): FeedbackNote => ({
@@ -34,6 +36,8 @@ describe('notes', () => {
         patternId={4}
         version={2}
         picked={{ row: 1, unit: 1 }}
+        current={{ row: 1, unit: 1 }}
+        onPick={() => {}}
         canWrite={false}
         canResolve
         onShow={onShow}
@@ -66,6 +70,8 @@ describe('notes', () => {
         patternId={4}
         version={version}
         picked={{ row: 1, unit: 1 }}
+        current={{ row: 1, unit: 1 }}
+        onPick={() => {}}
         canWrite={false}
         canResolve={false}
         onShow={() => {}}
@@ -95,11 +101,15 @@ describe('notes', () => {
         patternId={4}
         version={2}
         picked={{ row: 3, unit: 2 }}
+        current={{ row: 3, unit: 2 }}
+        onPick={() => {}}
         canWrite
         canResolve={false}
         onShow={() => {}}
       />,
     );
+    // The stepper is on the picked unit already: nothing to take.
+    expect(screen.getByRole('button', { name: 'Use current unit (row 3, unit 2)' })).toHaveProperty('disabled', true);
     expect(screen.getByRole('heading', { name: 'Leave a note on row 3, unit 2' })).toBeTruthy();
     await userEvent.type(screen.getByRole('textbox', { name: 'Note' }), 'Tension slips here.');
     await userEvent.click(screen.getByRole('button', { name: 'Add note' }));
@@ -116,6 +126,42 @@ describe('notes', () => {
     await userEvent.click(screen.getByRole('button', { name: 'Add note' }));
     await waitFor(() => expect(api.sent.filter((r) => r.method === 'POST')).toHaveLength(2));
     expect(api.sent.filter((r) => r.method === 'POST')[1]!.body).toEqual({ row: 3, text: 'Whole row.', version: 2 });
+  });
+});
+
+function NotesOnAChart({ current }: { current: StepPlace }) {
+  const [picked, setPicked] = useState<StepPlace>({ row: 1, unit: 1 });
+  return (
+    <FeedbackPanel
+      patternId={4}
+      version={2}
+      picked={picked}
+      current={current}
+      onPick={setPicked}
+      canWrite
+      canResolve={false}
+      onShow={() => {}}
+    />
+  );
+}
+
+describe('picking the unit by keyboard', () => {
+  it('takes the stepper’s current unit for the note with “Use current unit”', async () => {
+    const api = mockApi({
+      'GET /api/patterns/4/feedback': { json: { items: [] } },
+      'POST /api/patterns/4/feedback': { status: 201, json: note({}) },
+    });
+    renderWithApp(<NotesOnAChart current={{ row: 5, unit: 3 }} />);
+    expect(screen.getByRole('heading', { name: 'Leave a note on row 1, unit 1' })).toBeTruthy();
+    const use = screen.getByRole('button', { name: 'Use current unit (row 5, unit 3)' });
+    use.focus();
+    await userEvent.keyboard('{Enter}');
+    expect(screen.getByRole('heading', { name: 'Leave a note on row 5, unit 3' })).toBeTruthy();
+    expect(use).toHaveProperty('disabled', true);
+    await userEvent.type(screen.getByRole('textbox', { name: 'Note' }), 'Here.');
+    await userEvent.click(screen.getByRole('button', { name: 'Add note' }));
+    await waitFor(() => expect(api.sent.filter((r) => r.method === 'POST')).toHaveLength(1));
+    expect(api.sent.find((r) => r.method === 'POST')!.body).toMatchObject({ row: 5, unit: 3 });
   });
 });
 

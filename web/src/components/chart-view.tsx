@@ -39,6 +39,10 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
   const host = useRef<HTMLDivElement>(null);
   const chart = useRef<ChartHandle | null>(null);
   const drag = useRef<{ x: number; y: number; box: Box; moved: boolean } | null>(null);
+  // Pointers down on the chart; two of them pinch: the spread between them zooms round their middle.
+  const pointers = useRef(new Map<number, Point>());
+  const pinch = useRef<{ spread: number; box: Box; at: Point } | null>(null);
+  const pinched = useRef(false);
   const scene = useMemo(() => buildScene(model, { theme: dark ? 'dark' : 'light' }).value, [model, dark]);
   const full: Box = useMemo(() => ({ x: 0, y: 0, w: scene.width, h: scene.height }), [scene]);
   // The box's shape on the page (height over width); until it is measured, the chart's own, which the box reserves.
@@ -120,7 +124,33 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
   const zoom = (factor: number, at?: Point) =>
     moveTo((b) => zoomAt(b, full, factor, at?.x ?? b.x + b.w / 2, at?.y ?? b.y + b.h / 2));
 
+  const spread = () => {
+    const [a, b] = [...pointers.current.values()] as [Point, Point];
+    return Math.hypot(a.x - b.x, a.y - b.y);
+  };
+  const onPointerDown = (e: PointerEvent) => {
+    pointers.current.set(e.pointerId, { x: e.clientX, y: e.clientY });
+    if (pointers.current.size !== 2) {
+      drag.current = { x: e.clientX, y: e.clientY, box, moved: false };
+      return;
+    }
+    const [a, b] = [...pointers.current.values()] as [Point, Point];
+    pinch.current = { spread: spread(), box, at: toChart((a.x + b.x) / 2, (a.y + b.y) / 2) };
+    pinched.current = true;
+    drag.current = null;
+  };
+  const release = (e: PointerEvent) => {
+    pointers.current.delete(e.pointerId);
+    if (pointers.current.size < 2) pinch.current = null;
+  };
   const onPointerMove = (e: PointerEvent) => {
+    if (pointers.current.has(e.pointerId)) pointers.current.set(e.pointerId, { x: e.clientX, y: e.clientY });
+    const p = pinch.current;
+    if (p && pointers.current.size === 2) {
+      const now = spread();
+      if (now > 0 && p.spread > 0) moveTo(zoomAt(p.box, full, now / p.spread, p.at.x, p.at.y));
+      return;
+    }
     if (drag.current && chart.current) {
       const rect = chart.current.svg.node.getBoundingClientRect();
       const dx = ((drag.current.x - e.clientX) / rect.width) * drag.current.box.w;
@@ -136,9 +166,12 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
     setHover(info ? { info, left: e.clientX - box.left + 12, top: e.clientY - box.top + 16 } : null);
   };
   const onPointerUp = (e: PointerEvent) => {
-    const wasDrag = drag.current?.moved;
+    release(e);
+    // Lifting the fingers after a pinch picks nothing.
+    const wasGesture = drag.current?.moved || pinched.current;
+    if (pointers.current.size === 0) pinched.current = false;
     drag.current = null;
-    if (wasDrag || !onPick) return;
+    if (wasGesture || !onPick) return;
     const el = (e.target as Element).closest?.('[data-bead]');
     const unit = el ? model.beads[Number(el.getAttribute('data-bead'))]?.units[0] : undefined;
     if (unit !== undefined) onPick(unit);
@@ -155,6 +188,7 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
     if (e.key === '+' || e.key === '=') zoom(1.25);
     else if (e.key === '-') zoom(0.8);
     else if (e.key === '0') refit();
+    else if (e.key === 'Enter' && current !== undefined && onPick) onPick(current);
     else if (e.shiftKey && moves[e.key]) moveTo((b) => pan(b, full, ...moves[e.key]!));
     else return;
     e.preventDefault();
@@ -173,7 +207,7 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
           Fit
         </button>
         <span className="muted self-center text-xs">
-          Drag to pan; wheel, + and − to zoom; Shift+arrows pan when the chart has focus.
+          Drag to pan; pinch, wheel, + and − to zoom; on the chart, Shift+arrows pan and Enter picks the current unit.
         </span>
       </div>
       <div
@@ -185,12 +219,12 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
         className="chart-host relative w-full touch-none overflow-hidden rounded border border-slate-300 dark:border-slate-600"
         style={{ aspectRatio: `${scene.width} / ${scene.height}`, maxHeight: '75vh' }}
         onWheel={(e) => zoom(e.deltaY < 0 ? 1.15 : 1 / 1.15, toChart(e.clientX, e.clientY))}
-        onPointerDown={(e) => {
-          drag.current = { x: e.clientX, y: e.clientY, box, moved: false };
-        }}
+        onPointerDown={onPointerDown}
         onPointerMove={onPointerMove}
         onPointerUp={onPointerUp}
-        onPointerLeave={() => {
+        onPointerCancel={release}
+        onPointerLeave={(e) => {
+          release(e);
           drag.current = null;
           setHover(null);
         }}

@@ -13,10 +13,16 @@ import { QueryError } from './query-error.js';
 export const noteWhere = (n: Pick<FeedbackNote, 'row' | 'unit'>) =>
   `row ${n.row}${n.unit !== null ? `, unit ${n.unit}` : ''}`;
 
+const samePlace = (a: StepPlace, b: StepPlace) => a.row === b.row && a.unit === b.unit;
+
 export function FeedbackPanel(props: {
   patternId: number;
   version: number;
+  /** Where the next note goes: the last bead clicked on the chart, or the stepper's unit when asked for. */
   picked: StepPlace;
+  /** The stepper's unit, which a keyboard reader reaches with the arrow keys. */
+  current: StepPlace;
+  onPick(place: StepPlace): void;
   canWrite: boolean;
   canResolve: boolean;
   onShow(place: StepPlace): void;
@@ -43,7 +49,17 @@ export function FeedbackPanel(props: {
             Leave a note on row {props.picked.row}
             {whole ? '' : `, unit ${props.picked.unit}`}
           </h3>
-          <p className="muted mb-2 text-sm">Click a bead on the chart, or use the stepper, to choose the place.</p>
+          <div className="mb-2 flex flex-wrap items-center gap-x-3 gap-y-2 text-sm">
+            <p className="muted">Click a bead on the chart, or step to a unit and use it.</p>
+            <button
+              type="button"
+              className="btn"
+              disabled={samePlace(props.picked, props.current)}
+              onClick={() => props.onPick(props.current)}
+            >
+              Use current unit ({noteWhere(props.current)})
+            </button>
+          </div>
           <FormError error={add.error} />
           <label className="mb-2 flex items-center gap-2 text-sm">
             <input type="checkbox" checked={whole} onChange={(e) => setWhole(e.target.checked)} /> About the whole row

@@ -11,11 +11,14 @@ export function PatternViewer({
   model,
   place,
   onPlace,
+  onPick,
   noted,
 }: {
   model: Model;
   place: StepPlace | undefined;
   onPlace(p: StepPlace): void;
+  /** A unit picked on the chart (clicked, or Enter on the chart): the stepper goes there too. */
+  onPick?(p: StepPlace): void;
   noted?: readonly number[];
 }) {
   const dark = useDark();
@@ -30,7 +33,9 @@ export function PatternViewer({
         noted={noted}
         onPick={(id) => {
           const u = model.units[id];
-          if (u) onPlace(placeOf(u));
+          if (!u) return;
+          onPlace(placeOf(u));
+          onPick?.(placeOf(u));
         }}
       />
       {place ? (

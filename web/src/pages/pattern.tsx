@@ -14,7 +14,7 @@ import { feedbackQuery } from '../queries/feedback.js';
 import { useCompiled } from '../lib/compiled.js';
 import { patternParams } from '../lib/route-params.js';
 import { usePlace } from '../lib/use-place.js';
-import { unitAt } from '../lib/stepper.js';
+import { unitAt, validPlace, type StepPlace } from '../lib/stepper.js';
 import { PatternViewer } from '../components/pattern-viewer.js';
 import { TallyQueryPanel } from '../components/tally-panel.js';
 import { DiagnosticList, countText } from '../components/diagnostic-list.js';
@@ -51,6 +51,8 @@ function PatternBody({ detail, version }: { detail: PatternDetail; version?: num
   const saved = useQuery({ ...placeQuery(detail.id), enabled: keepsPlace });
   const savePlace = useSavePlace(detail.id);
   const [place, setPlace] = usePlace(model, saved.data, keepsPlace ? (p) => savePlace.mutate(p) : undefined);
+  // The note's place is chosen apart from the stepper: reading on does not move a note half written.
+  const [notePlace, setNotePlace] = useState<StepPlace | undefined>(place);
   const tally = useQuery(tallyQuery(detail.id, version));
   const remove = useDeletePattern(detail.id);
   const viewing = detail.viewing.version;
@@ -98,14 +100,16 @@ function PatternBody({ detail, version }: { detail: PatternDetail; version?: num
         </p>
       )}
       <Section title="Chart and steps">
-        <PatternViewer model={model} place={place} onPlace={setPlace} noted={noted} />
+        <PatternViewer model={model} place={place} onPlace={setPlace} onPick={setNotePlace} noted={noted} />
       </Section>
       {place && (
         <Section title="Notes">
           <FeedbackPanel
             patternId={detail.id}
             version={viewing}
-            picked={place}
+            picked={validPlace(model, notePlace) ?? place}
+            current={place}
+            onPick={setNotePlace}
             canWrite={detail.can.feedback}
             canResolve={detail.can.resolve}
             onShow={setPlace}
