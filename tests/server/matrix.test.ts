@@ -35,9 +35,11 @@ const viewer = { anonymous: 401, tester: 200, other: 404, owner: 200, admin: 200
 const ownerOnly = (ok: number) => ({ anonymous: 401, tester: 403, other: 404, owner: ok, admin: 403 });
 const adminOnly = (ok: number) => ({ anonymous: 401, tester: 403, other: 403, owner: 403, admin: ok });
 const anyone = (ok: number) => ({ anonymous: 401, tester: ok, other: ok, owner: ok, admin: ok });
+const everyone = (ok: number) => ({ anonymous: ok, tester: ok, other: ok, owner: ok, admin: ok });
 let unique = 0;
 
 const ROWS: Row[] = [
+  { method: 'get', path: () => '/api/health', expect: everyone(200) },
   { method: 'get', path: () => '/api/auth/me', expect: anyone(200) },
   { method: 'post', path: () => '/api/check', body: () => ({ source: SAMPLE }), expect: anyone(200) },
   { method: 'get', path: () => '/api/patterns', expect: anyone(200) },
@@ -123,26 +125,11 @@ const ROWS: Row[] = [
   },
   { method: 'delete', path: (f) => `/api/users/${f.scratchUser}`, expect: adminOnly(204), scratch: true },
   { method: 'get', path: () => '/api/dev/outbox', expect: adminOnly(200) },
-  {
-    method: 'get',
-    path: (f) => `/api/shared/${f.shareToken}`,
-    expect: { anonymous: 200, tester: 200, other: 200, owner: 200, admin: 200 },
-  },
-  {
-    method: 'get',
-    path: (f) => `/api/shared/${f.shareToken}/chart.svg`,
-    expect: { anonymous: 200, tester: 200, other: 200, owner: 200, admin: 200 },
-  },
-  {
-    method: 'get',
-    path: (f) => `/api/shared/${f.shareToken}/tally`,
-    expect: { anonymous: 200, tester: 200, other: 200, owner: 200, admin: 200 },
-  },
-  {
-    method: 'get',
-    path: (f) => `/api/shared/${f.shareToken}/steps`,
-    expect: { anonymous: 200, tester: 200, other: 200, owner: 200, admin: 200 },
-  },
+  { method: 'get', path: (f) => `/api/shared/${f.shareToken}`, expect: everyone(200) },
+  { method: 'get', path: (f) => `/api/shared/${f.shareToken}/chart.svg`, expect: everyone(200) },
+  { method: 'get', path: (f) => `/api/shared/${f.shareToken}/chart.png`, expect: everyone(200) },
+  { method: 'get', path: (f) => `/api/shared/${f.shareToken}/tally`, expect: everyone(200) },
+  { method: 'get', path: (f) => `/api/shared/${f.shareToken}/steps`, expect: everyone(200) },
 ];
 
 let h: Harness;
