@@ -81,6 +81,7 @@ export function renderStepsText(doc: StepsDoc): string {
   out.push(...doc.glossary.map((g) => `  ${glossLine(g)}`), '', 'Colours:');
   out.push(...doc.colors.map((c) => `  ${colorLine(c)}`));
   if (doc.notes.length) out.push('', 'Notes:', ...doc.notes.map((n) => `  ${n}`));
+  out.push('', 'Starting:', `  ${doc.start}`);
   for (const row of doc.rows) {
     out.push('', rowHeading(row), ...row.notes.map((n) => `  Note: ${n}`));
     for (const step of row.steps) {
@@ -103,6 +104,7 @@ export function renderStepsMarkdown(doc: StepsDoc): string {
   out.push(...doc.glossary.map((g) => `- **${md(g.term)}**: ${md(g.meaning)}`), '', '## Colours', '');
   out.push(...doc.colors.map((c) => `- ${md(colorLine(c))}`));
   if (doc.notes.length) out.push('', '## Notes', '', ...doc.notes.map((n) => `- ${md(n)}`));
+  out.push('', '## Starting', '', md(doc.start));
   for (const row of doc.rows) {
     out.push('', `## ${md(rowHeading(row))}`, '');
     if (row.notes.length) out.push(...row.notes.map((n) => `> ${md(n)}`), '');
@@ -152,6 +154,7 @@ export function renderStepsHtml(doc: StepsDoc): string {
   for (const c of doc.colors) body.push(`<li>${swatchHtml(c.hex)}${e(colorLine(c))}</li>`);
   body.push('</ul>');
   if (doc.notes.length) body.push('<h2>Notes</h2>', '<ul>', ...doc.notes.map((n) => `<li>${e(n)}</li>`), '</ul>');
+  body.push('<h2>Starting</h2>', `<p>${e(doc.start)}</p>`);
   for (const row of doc.rows) {
     body.push(`<section id="row-${row.row}">`, `<h2>${e(rowHeading(row))}</h2>`);
     body.push(...row.notes.map((n) => `<p class="note">${e(n)}</p>`), '<ol>');

@@ -63,9 +63,20 @@ export interface StepsDoc {
   glossary: { term: string; meaning: string }[];
   notes: string[];
   rows: StepRow[];
+  /** How to begin: thread length and the tail, before the first unit. */
+  start: string;
   /** How to end off once the last unit is done, the same words for every piece. */
   finish: string;
 }
+
+/**
+ * Getting going, in plain words: the lengths are the tally's defaults
+ * (a 150 cm working thread, a 15 cm tail; common practice, from memory).
+ */
+export const startWords = (word: 'row' | 'round'): string =>
+  'Cut a comfortable length of thread (about 150 cm) and thread the needle. ' +
+  `Pick up the beads of ${word} 1, unit 1 and slide them down to about 15 cm from the end: ` +
+  'that tail is left loose to hold while you work and is finished off at the end.';
 
 /**
  * Securing the ends, in plain words: common practice (from memory), the way
@@ -236,6 +247,7 @@ export function buildSteps(model: Model): StepsDoc {
     glossary: glossary(model),
     notes: model.header.notes,
     rows: model.rows.map((r, i) => buildRow(ctx, r, stepOf, model.rows[i - 1])),
+    start: startWords(model.rows[0]?.word ?? 'row'),
     finish: FINISH,
   };
 }

@@ -81,6 +81,17 @@ describe('steps document on a hand-built strip', () => {
     expect(out.startsWith('# Two \\<Units\\> \\& Co\n')).toBe(true);
   });
 
+  it('starts with the thread length and the tail, before the first row, in every format', () => {
+    // common practice: a working thread of about an arm's span, a tail to hold (the tally's defaults, 150 cm and 15 cm).
+    expect(doc.start).toContain('about 150 cm');
+    expect(doc.start).toContain('row 1, unit 1');
+    expect(doc.start).toContain('about 15 cm from the end');
+    const text = renderStepsText(doc);
+    expect(text).toContain(`\nStarting:\n  ${doc.start}\n\nRow 1:`);
+    expect(renderStepsMarkdown(doc)).toContain(`## Starting\n\n${doc.start}\n`);
+    expect(renderStepsHtml(doc)).toContain(`<h2>Starting</h2>\n<p>${doc.start}</p>`);
+  });
+
   it('ends with how to secure the thread and the starting tail, in every format', () => {
     // common practice: end off by passing back through a few units, a knot between beads, then trimming.
     expect(doc.finish).toMatch(/^When the last unit is done, take the needle back through/);
