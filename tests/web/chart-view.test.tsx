@@ -101,8 +101,14 @@ describe('chart view', () => {
     const model = modelOf(panel);
     const onPick = vi.fn();
     const current = model.rows[1]!.units[0]!;
-    render(<ChartView model={model} dark={false} current={current} onPick={onPick} />);
+    const { rerender } = render(<ChartView model={model} dark={false} current={current} onPick={onPick} />);
+    // Where a pick is only a step (share links, the preview), Enter does nothing and the help does not offer it.
     screen.getByTestId('chart').focus();
+    await userEvent.keyboard('{Enter}');
+    expect(onPick).not.toHaveBeenCalled();
+    expect(screen.queryByText(/Enter picks/)).toBeNull();
+    rerender(<ChartView model={model} dark={false} current={current} onPick={onPick} enterPicks />);
+    expect(screen.getByText(/Enter picks the current unit for a note/)).toBeTruthy();
     await userEvent.keyboard('{Enter}');
     expect(onPick).toHaveBeenCalledWith(current);
   });

@@ -21,6 +21,8 @@ export interface ChartViewProps {
   /** Units with open notes. */
   noted?: readonly number[];
   onPick?(unitId: number): void;
+  /** Enter on the chart picks the current unit: said in the help only where a pick means more than a step (notes). */
+  enterPicks?: boolean;
 }
 
 /** The middle of a unit's beads in chart units, to keep the reader's unit in view. */
@@ -34,7 +36,7 @@ function unitCentre(scene: Scene, unit: number | undefined): Point | undefined {
   };
 }
 
-export function ChartView({ model, dark, current, noted = [], onPick }: ChartViewProps) {
+export function ChartView({ model, dark, current, noted = [], onPick, enterPicks = false }: ChartViewProps) {
   const figure = useRef<HTMLElement>(null);
   const host = useRef<HTMLDivElement>(null);
   const chart = useRef<ChartHandle | null>(null);
@@ -188,7 +190,7 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
     if (e.key === '+' || e.key === '=') zoom(1.25);
     else if (e.key === '-') zoom(0.8);
     else if (e.key === '0') refit();
-    else if (e.key === 'Enter' && current !== undefined && onPick) onPick(current);
+    else if (e.key === 'Enter' && enterPicks && current !== undefined && onPick) onPick(current);
     else if (e.shiftKey && moves[e.key]) moveTo((b) => pan(b, full, ...moves[e.key]!));
     else return;
     e.preventDefault();
@@ -207,7 +209,8 @@ export function ChartView({ model, dark, current, noted = [], onPick }: ChartVie
           Fit
         </button>
         <span className="muted self-center text-xs">
-          Drag to pan; pinch, wheel, + and − to zoom; on the chart, Shift+arrows pan and Enter picks the current unit.
+          Drag to pan; pinch, wheel, + and − to zoom; on the chart, Shift+arrows pan
+          {enterPicks ? ' and Enter picks the current unit for a note' : ''}.
         </span>
       </div>
       <div

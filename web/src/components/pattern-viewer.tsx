@@ -31,6 +31,7 @@ export function PatternViewer({
         dark={dark}
         current={unit?.id}
         noted={noted}
+        enterPicks={onPick !== undefined}
         onPick={(id) => {
           const u = model.units[id];
           if (!u) return;

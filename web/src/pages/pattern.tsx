@@ -100,7 +100,13 @@ function PatternBody({ detail, version }: { detail: PatternDetail; version?: num
         </p>
       )}
       <Section title="Chart and steps">
-        <PatternViewer model={model} place={place} onPlace={setPlace} onPick={setNotePlace} noted={noted} />
+        <PatternViewer
+          model={model}
+          place={place}
+          onPlace={setPlace}
+          onPick={detail.can.feedback ? setNotePlace : undefined}
+          noted={noted}
+        />
       </Section>
       {place && (
         <Section title="Notes">
