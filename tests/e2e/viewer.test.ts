@@ -88,6 +88,16 @@ describe('designer and tester in the browser', () => {
     await page.waitForURL(/\/patterns\/\d+$/);
     patternId = Number(/\/patterns\/(\d+)$/.exec(page.url())![1]);
     await page.getByRole('heading', { name: TITLE, exact: true }).waitFor();
+    // The move to the new page put focus on its heading, so a screen reader announces it.
+    await expect
+      .poll(() =>
+        page.evaluate(
+          () =>
+            (globalThis as unknown as { document: { activeElement: { textContent: string } | null } }).document
+              .activeElement?.textContent,
+        ),
+      )
+      .toBe(TITLE);
 
     const tallyText = await page.getByTestId('tally-beads').textContent();
     const beads = await page.getByTestId('chart').locator('[data-bead]').count();
