@@ -103,7 +103,11 @@ function Editor({ detail }: { detail: PatternDetail }) {
                 onChange={setText}
                 height="60vh"
                 theme={dark ? 'dark' : 'light'}
-                extensions={[ffpHighlighting(dark), checkMarks, EditorView.contentAttributes.of({ 'aria-labelledby': 'editor-label' })]}
+                extensions={[
+                  ffpHighlighting(dark),
+                  checkMarks,
+                  EditorView.contentAttributes.of({ 'aria-labelledby': 'editor-label' }),
+                ]}
                 basicSetup={{ lineNumbers: true, foldGutter: false, autocompletion: false }}
                 onCreateEditor={(v) => {
                   view.current = v;
