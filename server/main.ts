@@ -53,6 +53,7 @@ export async function startServer(options: ServeOptions): Promise<Running> {
     const demoPassword = env.FOURFOLD_DEMO_PASSWORD || DEFAULT_DEMO_PASSWORD;
     const seeded =
       options.demo && !production && (await seedDemo(db, { password: demoPassword, examplesDir: options.examplesDir }));
+    if (seeded) log("seeded the demo studio: three accounts, and the examples as the designer's patterns");
     const mailer = await createMailer({
       smtpUrl: env.SMTP_URL || undefined,
       from: env.MAIL_FROM || 'Fourfold <no-reply@fourfold.invalid>',

@@ -29,16 +29,23 @@ async function buildWebIfMissing(root: string, io: CliIO): Promise<void> {
   await execa('npm', ['run', 'build:web'], { cwd: root, stdout: 'ignore', stderr: 'inherit' });
 }
 
-const untilSignal = () =>
-  new Promise<string>((done) => {
-    const stop = (signal: string) => {
+/** The first SIGINT or SIGTERM; `ignore()` gives the signals back (a failed start must not keep Ctrl-C). */
+function untilSignal(): { signal: Promise<string>; ignore(): void } {
+  let ignore = () => {};
+  const signal = new Promise<string>((done) => {
+    const stop = (name: string) => {
+      ignore();
+      done(name);
+    };
+    ignore = () => {
       process.off('SIGINT', stop);
       process.off('SIGTERM', stop);
-      done(signal);
     };
     process.on('SIGINT', stop);
     process.on('SIGTERM', stop);
   });
+  return { signal, ignore };
+}
 
 export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
   const root = projectRoot();
@@ -61,7 +68,12 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
       log,
     });
   } catch (error) {
-    io.stderr.write(`fourfold: serve: ${(error as Error).message}\n`);
+    const inUse = (error as NodeJS.ErrnoException).code === 'EADDRINUSE';
+    const message = inUse
+      ? `port ${port} on 127.0.0.1 is already in use; stop what listens there, or pick another with --port or PORT`
+      : (error as Error).message;
+    io.stderr.write(`fourfold: serve: ${message}\n`);
+    stopped.ignore();
     return EXIT_FAILURE;
   }
   if (examples) {
@@ -80,12 +92,14 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
   } else {
     io.stdout.write(`Fourfold viewer: ${running.url}\n`);
     if (accounts.length) {
-      io.stdout.write(`Demo accounts (password ${running.demoPassword}):\n`);
+      // On later starts the accounts are the ones the first start made, which may have been changed since.
+      const since = running.seeded ? '' : ', unless changed since the first start';
+      io.stdout.write(`Demo accounts (password ${running.demoPassword}${since}):\n`);
       for (const a of accounts) io.stdout.write(`  ${a.role.padEnd(9)} ${a.email}\n`);
     }
     io.stdout.write('Press Ctrl-C to stop.\n');
   }
-  const signal = await stopped;
+  const signal = await stopped.signal;
   log(`${signal}: stopping...`);
   await running.close();
   log('stopped.');

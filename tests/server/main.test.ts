@@ -1,6 +1,10 @@
 /** startServer (what `fourfold serve` runs) on an existing database given by DATABASE_URL: migrate, seed once, serve, close. */
+import { once } from 'node:events';
+import { createServer, type AddressInfo } from 'node:net';
 import { resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { EXIT_FAILURE, type CliIO } from '../../bin/command.js';
+import { run as runServe } from '../../bin/commands/serve.js';
 import { connect } from '../../server/db/connect.js';
 import { startServer } from '../../server/main.js';
 import { freshDatabaseUrl } from './harness.js';
@@ -38,6 +42,7 @@ describe('startServer', () => {
     try {
       expect(first.seeded).toBe(true);
       expect(lines).toContain('applied migrations: 0001-initial');
+      expect(lines.some((l) => l.startsWith('seeded the demo studio'))).toBe(true);
       const login = await json(`${first.url}/api/auth/login`, {
         method: 'POST',
         body: JSON.stringify({ email: 'designer@example.com', password: 'demo-pass-123' }),
@@ -65,6 +70,32 @@ describe('startServer', () => {
     } finally {
       await again.close();
     }
+  });
+
+  it('says which port is taken and how to pick another, and leaves Ctrl-C alone afterwards', async () => {
+    const blocker = createServer().listen(0, '127.0.0.1');
+    await once(blocker, 'listening');
+    const port = (blocker.address() as AddressInfo).port;
+    const err: string[] = [];
+    const out: string[] = [];
+    const io: CliIO = {
+      stdout: { write: (t) => out.push(String(t)) },
+      stderr: { write: (t) => err.push(t) },
+      readStdin: async () => Buffer.alloc(0),
+      env: { DATABASE_URL: await freshDatabaseUrl(), NODE_ENV: 'development' },
+      cwd: root,
+    };
+    const sigints = process.listenerCount('SIGINT');
+    try {
+      const code = await runServe({ name: 'serve', operands: [], options: { port } }, io);
+      expect(code).toBe(EXIT_FAILURE);
+    } finally {
+      blocker.close();
+    }
+    expect(err.join('')).toContain(`port ${port} on 127.0.0.1 is already in use`);
+    expect(err.join('')).toContain('--port or PORT');
+    expect(out).toEqual([]);
+    expect(process.listenerCount('SIGINT')).toBe(sigints);
   });
 
   it('never seeds the demo in production', async () => {
