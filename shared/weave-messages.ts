@@ -92,6 +92,12 @@ export function beadCountDiagnostic(
   return d;
 }
 
+/** A rule a unit or skip breaks: what is wrong, and how to put it right. */
+export interface Misplaced {
+  message: string;
+  hint: string;
+}
+
 /** Why a unit's mark is not allowed where it stands (NOTATION.md section 2, "Marks"), or null. */
 export function misplacedMark(
   layout: Layout,
@@ -102,26 +108,55 @@ export function misplacedMark(
   /** An unmarked unit follows in the row. */
   plainAfter: boolean,
   i: number,
-): string | null {
+): Misplaced | null {
   if (item.mark === '*') {
-    if (layout !== 'flat') return `a fresh ring '*' is only used in flat pieces; this is a ${layout}`;
+    if (layout !== 'flat')
+      return {
+        message: `a fresh ring '*' is only used in flat pieces; this is a ${layout}`,
+        hint: "remove the '*' and write the unit's new beads",
+      };
     if (firstRow)
-      return `${word} 1 starts with an unmarked unit; '*' starts a later row one place beyond the end of the row before`;
-    if (!first || i > 0) return "a fresh ring '*' can only be the first unit of a row";
+      return {
+        message: `${word} 1 starts with an unmarked unit; '*' starts a later row one place beyond the end of the row before`,
+        hint: "remove the '*'",
+      };
+    if (!first || i > 0)
+      return {
+        message: "a fresh ring '*' can only be the first unit of a row",
+        hint: 'move it to the start of the row',
+      };
   }
   if (item.mark === '+') {
-    if (first) return "an increase '+' shares the bead of the unit before it, so it cannot be a row's first unit";
+    if (first)
+      return {
+        message: "an increase '+' shares the bead of the unit before it, so it cannot be a row's first unit",
+        hint: 'start the row with an ordinary unit',
+      };
     if (firstRow)
-      return `${word} 1 has no ${word} below it, so an increase '+' means nothing there; write the unit unmarked`;
-    if (layout === 'tube') return "a tube keeps the same number of units in every row, so it has no increases '+'";
+      return {
+        message: `${word} 1 has no ${word} below it, so an increase '+' means nothing there; write the unit unmarked`,
+        hint: "remove the '+'",
+      };
+    if (layout === 'tube')
+      return {
+        message: "a tube keeps the same number of units in every row, so it has no increases '+'",
+        hint: "remove the '+', or change the layout to round",
+      };
     if (layout === 'flat' && plainAfter)
-      return "in a flat piece an increase '+' can only stand at the end of a row, after the units built on the row before";
+      return {
+        message:
+          "in a flat piece an increase '+' can only stand at the end of a row, after the units built on the row before",
+        hint: "move the increases after the row's last ordinary unit",
+      };
   }
   return null;
 }
 
-export function misplacedSkip(firstRow: boolean, word: 'row' | 'round'): string {
+export function misplacedSkip(firstRow: boolean, word: 'row' | 'round'): Misplaced {
   return firstRow
-    ? `${word} 1 has no ${word} below it to pass over, so it cannot skip '-'`
-    : "in a flat piece a skip '-' can only stand at the start or the end of a row";
+    ? { message: `${word} 1 has no ${word} below it to pass over, so it cannot skip '-'`, hint: 'remove the skip' }
+    : {
+        message: "in a flat piece a skip '-' can only stand at the start or the end of a row",
+        hint: 'move the skip to an end of the row, or remove it',
+      };
 }

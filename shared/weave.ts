@@ -152,7 +152,8 @@ class Builder {
       if (item.type === 'skip') {
         const inside = firstUnitAt !== -1 && i > firstUnitAt && i < lastUnitAt;
         if (firstRow || (!this.closed && inside)) {
-          this.error('misplaced-mark', misplacedSkip(firstRow, word), item.range);
+          const skip = misplacedSkip(firstRow, word);
+          this.error('misplaced-mark', skip.message, item.range, skip.hint);
           return { row, complete: false };
         }
         if (ptr >= slots.length) {
@@ -198,7 +199,7 @@ class Builder {
       unit.col =
         wantsBase && slot ? slot.col : before ? before.col + h : item.mark === '*' ? (slot?.col ?? 0) - h : index - 1;
       if (misplaced) {
-        this.error('misplaced-mark', misplaced, item.range);
+        this.error('misplaced-mark', misplaced.message, item.range, misplaced.hint);
         return { row, complete: false };
       }
       if (wantsBase && ptr >= slots.length) {

@@ -18,6 +18,15 @@ const cases: [string, Layout, string[], string][] = [
   ['no-base-left on a skip', 'flat', ['AAAA AAA', 'AAA AA - -'], 'no-base-left'],
   ['uncovered-base', 'flat', ['AAAA AAA AAA', 'AAA AA'], 'uncovered-base'],
   ['no-passage', 'flat', [long, `${'- '.repeat(14)}AAA AA AA AA AA AA`], 'no-passage'],
+  ["misplaced-mark: '+' in row 1", 'flat', ['AAAA +AAA'], 'misplaced-mark'],
+  ["misplaced-mark: '+' first", 'flat', ['AAAA AAA', '+AAA AA'], 'misplaced-mark'],
+  ["misplaced-mark: '+' in a tube", 'tube', ['AAAA AAA AAA AA', 'AAA +AAA AA AA A'], 'misplaced-mark'],
+  ["misplaced-mark: '+' before a plain unit", 'flat', ['AAAA AAA AAA', 'AAA +AAA AA'], 'misplaced-mark'],
+  ["misplaced-mark: '*' in a round", 'round', ['AAAA AAA AAA AA', '*AAAA AA AA A'], 'misplaced-mark'],
+  ["misplaced-mark: '*' in row 1", 'flat', ['*AAAA AAA'], 'misplaced-mark'],
+  ["misplaced-mark: '*' not first", 'flat', ['AAAA AAA', 'AAA *AAAA'], 'misplaced-mark'],
+  ["misplaced-mark: '-' in row 1", 'flat', ['AAAA AAA -'], 'misplaced-mark'],
+  ["misplaced-mark: '-' inside a flat row", 'flat', ['AAAA AAA AAA', 'AAA - AA'], 'misplaced-mark'],
 ];
 
 describe('engine diagnostics carry a hint', () => {
