@@ -140,7 +140,8 @@ export function Pager({
 }) {
   const pages = Math.max(1, Math.ceil(total / params.pageSize));
   return (
-    <nav aria-label="Pages" className="mt-4 flex items-center gap-3 text-sm">
+    // On a phone the count takes its own line above the buttons, so no label breaks in two.
+    <nav aria-label="Pages" className="mt-4 flex flex-wrap items-center gap-3 text-sm whitespace-nowrap">
       <button
         type="button"
         className="btn"
@@ -149,7 +150,7 @@ export function Pager({
       >
         Previous page
       </button>
-      <span>
+      <span className="order-first w-full sm:order-none sm:w-auto">
         Page {params.page} of {pages} ({total} pattern{total === 1 ? '' : 's'})
       </span>
       <button
