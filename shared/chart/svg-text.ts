@@ -58,8 +58,12 @@ const SVG_NAMES = ['xmlns', ...ROOT_NAMES];
 const SLACK = 2048;
 
 class TextSink implements SvgSink {
-  /** Starts well above SLACK, so the XML declaration needs no check either. */
-  bytes = new Uint8Array(1 << 16);
+  /** Sized from the scene (an element is rarely over 256 bytes), so a large chart is not copied as it grows; always well above SLACK, so the XML declaration needs no check either. */
+  bytes: Uint8Array;
+
+  constructor(items: number) {
+    this.bytes = new Uint8Array(Math.max(1 << 16, items * 256));
+  }
   length = 0;
 
   private room(n: number): void {
@@ -160,7 +164,7 @@ class TextSink implements SvgSink {
 }
 
 export function sceneToSvg(scene: Scene, fonts: readonly EmbeddedFont[] = []): string {
-  const sink = new TextSink();
+  const sink = new TextSink(scene.items.length);
   sink.put(XML_DECL);
   sink.open('svg', SVG_NAMES, ['http://www.w3.org/2000/svg', ...rootValues(scene)]);
   sceneChildren(sink, scene, fonts);
