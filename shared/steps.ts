@@ -165,8 +165,12 @@ function locate(ctx: Ctx, bead: number, unit: Unit, next: Unit | undefined): str
 
 function roundMoves(ctx: Ctx, step: UnitStep, heading: Heading): StepMove[] {
   const moves: StepMove[] = [];
+  const firstPicked = step.actions.find((a) => a.kind === 'pickup')?.bead;
   for (const action of step.actions) {
-    const ref = beadRef(ctx, action.bead, placeWords(action.place, heading, ctx.model.layout.kind));
+    const place = placeWords(action.place, heading, ctx.model.layout.kind);
+    // Closing a ring of four goes back through its first bead: say so, a beginner looks for it by order, not place.
+    const again = action.kind === 'pass' && action.bead === firstPicked ? ', the first bead of this unit' : '';
+    const ref = beadRef(ctx, action.bead, `${place}${again}`);
     const last = moves[moves.length - 1];
     if (last && last.kind === action.kind) last.beads.push(ref);
     else moves.push({ kind: action.kind, beads: [ref] });

@@ -81,6 +81,14 @@ describe('steps document on a hand-built strip', () => {
     expect(out.startsWith('# Two \\<Units\\> \\& Co\n')).toBe(true);
   });
 
+  it('says that a ring of four closes through its own first bead, and only there', () => {
+    // common practice: a fresh ring of four beads is closed by passing through the first bead again (NOTATION.md 4, rule 1).
+    const [first, second] = row.steps;
+    const passes = (s: typeof first) => s!.round.filter((m) => m.kind === 'pass').flatMap((m) => m.beads);
+    expect(passes(first).map((b) => b.where)).toEqual(['right side, the first bead of this unit']);
+    expect(passes(second).some((b) => b.where.includes('first bead of this unit'))).toBe(false);
+  });
+
   it('starts with the thread length and the tail, before the first row, in every format', () => {
     // common practice: a working thread of about an arm's span, a tail to hold (the tally's defaults, 150 cm and 15 cm).
     expect(doc.start).toContain('about 150 cm');
