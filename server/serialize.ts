@@ -5,7 +5,9 @@ import type { UserInstance } from './models/user.js';
 import type { VersionInstance } from './models/version.js';
 import { countSeverity } from './engine.js';
 
-const iso = (d: Date | null | undefined): string | null => (d ? new Date(d).toISOString() : null);
+/** ISO 8601; text is already that (the library query formats its dates in SQL). */
+const iso = (d: Date | string | null | undefined): string | null =>
+  typeof d === 'string' ? d : d ? d.toISOString() : null;
 const person = (u: { id: number; name: string } | null | undefined) =>
   u ? { id: u.id, name: u.name } : { id: 0, name: 'Former member' };
 
@@ -23,7 +25,11 @@ export interface Sharing {
 }
 
 /** A pattern row with its owner's id and name (an instance with `owner` included, or a plain row). */
-export type PatternRow = Omit<PatternAttributes, 'ownerId'> & { owner?: { id: number; name: string } | null };
+export type PatternRow = Omit<PatternAttributes, 'ownerId' | 'createdAt' | 'updatedAt'> & {
+  createdAt: Date | string;
+  updatedAt: Date | string;
+  owner?: { id: number; name: string } | null;
+};
 
 export function toSummary(p: PatternRow, sharing: Sharing) {
   const owner = p.owner;

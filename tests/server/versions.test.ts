@@ -156,6 +156,11 @@ describe('versions', () => {
     expect(band.body).toMatchObject({ total: 3, page: 1, pageSize: 1 });
     const strips = await as(lister, request(h.app).get('/api/patterns?q=strip')).expect(200);
     expect(strips.body).toMatchObject({ total: 1, items: [{ title: 'Birch Strip' }] });
+    // The library formats its dates in SQL, the detail through Date: both must give the same ISO 8601 text.
+    const detail = await as(lister, request(h.app).get(`/api/patterns/${strips.body.items[0].id}`)).expect(200);
+    expect(strips.body.items[0].createdAt).toMatch(/^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d\.000Z$/);
+    expect(strips.body.items[0]).toMatchObject({ createdAt: detail.body.createdAt, updatedAt: detail.body.updatedAt });
+    expect(Math.abs(Date.parse(detail.body.createdAt) - Date.now())).toBeLessThan(10 * 60_000);
     const past = await as(lister, request(h.app).get('/api/patterns?q=strip&page=3')).expect(200);
     expect(past.body).toMatchObject({ total: 1, page: 3, items: [] });
     await as(lister, request(h.app).get('/api/patterns?pageSize=1000')).expect(400);
