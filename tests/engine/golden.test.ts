@@ -4,13 +4,14 @@
  * ajv (a reference JSON Schema 2020-12 validator).
  */
 import { describe, expect, test } from 'vitest';
-import { existsSync, mkdirSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { Ajv2020 } from 'ajv/dist/2020.js';
 import { compile } from '../../shared/compile.js';
 import { compileAst } from '../../shared/weave-model.js';
 import type { Model } from '../../shared/model.js';
 import { fanRows, panelRows, pattern, tubeRows } from './build-ast.js';
+import { expectGolden } from '../golden.js';
 
 const schema = JSON.parse(readFileSync('shared/schema/model.schema.json', 'utf8')) as object;
 const validate = new Ajv2020({ allErrors: true, strict: true }).compile(schema);
@@ -32,12 +33,7 @@ describe.runIf(examples.length > 0)('examples', () => {
     expect(diagnostics.filter((d) => d.severity === 'error')).toEqual([]);
     expect(valid(value.model)).toEqual([]);
     const text = `${JSON.stringify(value.model, null, 1)}\n`;
-    const golden = join(goldenDir, file.replace(/\.ffp$/, '.model.json'));
-    if (!existsSync(golden) || process.env.UPDATE_GOLDEN === '1') {
-      mkdirSync(goldenDir, { recursive: true });
-      writeFileSync(golden, text);
-    }
-    expect(text).toBe(readFileSync(golden, 'utf8'));
+    expectGolden(join(goldenDir, file.replace(/\.ffp$/, '.model.json')), text);
   });
 });
 

@@ -2,7 +2,7 @@
  * The outputs on real models from the engine: every example, plus small
  * patterns whose counts have closed forms (NOTATION.md section 8).
  */
-import { existsSync, mkdirSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { basename, join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { XMLValidator } from 'fast-xml-parser';
@@ -10,6 +10,7 @@ import { compile } from '../../shared/compile.js';
 import { hasErrors } from '../../shared/diagnostic.js';
 import { renderKitHtml, renderKitMarkdown } from '../../shared/kit.js';
 import { materialChecks } from '../../shared/color-checks.js';
+import { expectGolden } from '../golden.js';
 import { buildSteps } from '../../shared/steps.js';
 import { renderStepsHtml, renderStepsText } from '../../shared/steps-render.js';
 import { pathLengthMm, tally } from '../../shared/tally.js';
@@ -134,12 +135,6 @@ describe.each(examples)('example %s', (file) => {
   it('matches its golden steps text', () => {
     // Examples keep their golden files in golden/; our own patterns keep theirs beside them.
     const dir = file.startsWith(OWN) ? OWN : GOLDEN;
-    const golden = join(dir, `${basename(file, '.ffp')}.steps.txt`);
-    const out = renderStepsText(buildSteps(model));
-    if (process.env.UPDATE_GOLDEN === '1' || !existsSync(golden)) {
-      mkdirSync(dir, { recursive: true });
-      writeFileSync(golden, out);
-    }
-    expect(out).toBe(readFileSync(golden, 'utf8'));
+    expectGolden(join(dir, `${basename(file, '.ffp')}.steps.txt`), renderStepsText(buildSteps(model)));
   });
 });
