@@ -3,6 +3,7 @@
  * true size) the 1 cm scale bar below it. Sizes are in page mm and do not
  * follow the chart's scale, so the text stays readable at any bead size.
  */
+import { colorName } from '../color-name.js';
 import type { Model } from '../model.js';
 import { labelColor } from './contrast.js';
 import { round2 } from './geometry.js';
@@ -15,7 +16,16 @@ const TITLE = 5;
 const INFO = 3;
 const LEGEND = 3;
 const SWATCH = 4.5;
+/** Swatch to text. */
+const SWATCH_GAP = 1.5;
+/** Between one legend column's counts and the next column's swatches. */
+const COLUMN_GAP = 6;
 
+/**
+ * Width of a line of text: JetBrains Mono (the embedded face) gives every
+ * character the same advance, 0.6 em (600 of its 1000 units per em), so a
+ * count of characters measures the text exactly.
+ */
 export const textWidth = (text: string, size: number): number => [...text].length * ADVANCE * size;
 
 const text = (
@@ -92,6 +102,15 @@ export function hatch(index: number, theme: Theme): HatchPattern {
   return { id: `ff-hatch-${index}`, size, d, stroke: theme.ink, strokeWidth: 0.22 };
 }
 
+/** What the legend calls a colour: the designer's name, else its CSS name, else its hex. */
+export const legendName = (entry: { name: string; hex: string }): string => colorName(entry) || entry.hex;
+
+/**
+ * Swatch, name, count per colour, in as many columns as fit. Every entry
+ * shares one measured width, so names start and counts end on the same line
+ * in every column, and the longest name stays two character cells clear of
+ * its count, so "deep teal" and "36" read as two columns.
+ */
 export function legend(
   model: Model,
   theme: Theme,
@@ -100,16 +119,20 @@ export function legend(
   maxWidth: number,
 ): { items: Primitive[]; patterns: HatchPattern[]; height: number; width: number } {
   const counts = countsByKey(model);
-  const countWidth = Math.max(1, ...[...counts.values()].map((c) => String(c).length));
-  const nameOf = (p: { name: string; hex: string }): string => p.name || p.hex;
-  const nameWidth = Math.max(1, ...model.palette.map((p) => [...nameOf(p)].length));
-  const entryWidth = SWATCH + 1.5 + (nameWidth + countWidth + 2) * ADVANCE * LEGEND + 4;
-  const columns = Math.max(1, Math.min(model.palette.length, Math.floor(maxWidth / entryWidth)));
+  const cell = ADVANCE * LEGEND;
+  const names = model.palette.map(legendName);
+  const nameWidth = Math.max(cell, ...names.map((n) => textWidth(n, LEGEND)));
+  const countWidth = Math.max(cell, ...model.palette.map((p) => textWidth(String(counts.get(p.key) ?? 0), LEGEND)));
+  // On a hatched swatch the letter sits beside the swatch, where the ink has paper behind it.
+  const nameOffset = SWATCH + SWATCH_GAP + (theme.patternedLegend ? 2 * cell : 0);
+  const countOffset = nameOffset + nameWidth + 2 * cell + countWidth;
+  const pitch = countOffset + COLUMN_GAP;
+  const columns = Math.max(1, Math.min(model.palette.length, Math.floor((maxWidth + COLUMN_GAP) / pitch)));
   const rowHeight = SWATCH + 1.5;
   const items: Primitive[] = [];
   const patterns: HatchPattern[] = [];
   model.palette.forEach((entry, i) => {
-    const x = left + (i % columns) * entryWidth;
+    const x = left + (i % columns) * pitch;
     const y = top + Math.floor(i / columns) * rowHeight;
     const data = { key: entry.key };
     items.push({
@@ -143,42 +166,19 @@ export function legend(
       });
     }
     const baseline = y + SWATCH / 2 + (LEGEND * CAP_HEIGHT) / 2;
-    const key = text(
-      `ff-legend-${entry.key}-key`,
-      'legend-key',
-      x + SWATCH / 2,
-      baseline,
-      LEGEND,
-      entry.key,
-      theme.patternedLegend ? theme.ink : labelColor(entry.hex),
-      true,
-    );
-    key.anchor = 'middle';
-    // On a hatched swatch the letter sits beside the swatch, where the ink has paper behind it.
-    if (theme.patternedLegend) key.x = round2(x + SWATCH + 1.5 + (ADVANCE * LEGEND) / 2);
-    items.push({ ...key, data });
-    const nameX = x + SWATCH + 1.5 + (theme.patternedLegend ? 2 * ADVANCE * LEGEND : 0);
-    items.push({
-      ...text(`ff-legend-${entry.key}-name`, 'legend-name', nameX, baseline, LEGEND, nameOf(entry), theme.ink),
+    const part = (suffix: string, role: TextPrim['role'], px: number, value: string, color: string, bold = false) => ({
+      ...text(`ff-legend-${entry.key}-${suffix}`, role, px, baseline, LEGEND, value, color, bold),
       data,
     });
-    const countX = nameX + (nameWidth + 1 + countWidth) * ADVANCE * LEGEND;
-    items.push({
-      ...text(
-        `ff-legend-${entry.key}-count`,
-        'legend-count',
-        countX,
-        baseline,
-        LEGEND,
-        String(counts.get(entry.key) ?? 0),
-        theme.muted,
-      ),
-      anchor: 'end',
-      data,
-    });
+    const keyX = theme.patternedLegend ? x + SWATCH + SWATCH_GAP + cell / 2 : x + SWATCH / 2;
+    const keyColor = theme.patternedLegend ? theme.ink : labelColor(entry.hex);
+    items.push({ ...part('key', 'legend-key', keyX, entry.key, keyColor, true), anchor: 'middle' });
+    items.push(part('name', 'legend-name', x + nameOffset, names[i]!, theme.ink));
+    const count = String(counts.get(entry.key) ?? 0);
+    items.push({ ...part('count', 'legend-count', x + countOffset, count, theme.muted), anchor: 'end' });
   });
   const rows = Math.ceil(model.palette.length / columns);
-  return { items, patterns, height: rows * rowHeight, width: columns * entryWidth };
+  return { items, patterns, height: rows * rowHeight, width: columns * pitch - COLUMN_GAP };
 }
 
 /** A 10 mm bar with end ticks and its caption, for checking a print's scale. */
