@@ -4,6 +4,7 @@
  */
 import { createTokenInstance, Lexer, type IToken } from 'chevrotain';
 import type { Diagnostic } from '../shared/diagnostic.js';
+import { lookAlike } from './characters.js';
 import type { LineIndex } from './positions.js';
 import { ColorKey, HeaderKey, lexerDefinition, LineEnd } from './tokens.js';
 
@@ -42,15 +43,22 @@ export function lex(text: string, index: LineIndex): Lexed {
       inRow = ROW_LINE.test(head) && /[:\d]/.test(head);
       rowLine.set(range.line, inRow);
     }
-    return {
+    const hint = inRow
+      ? "a row holds units of colour keys A-Z (optionally after '*' or '+'), groups like '(AB CB)x2', skips '-', and a comment after '#'"
+      : "a line starts with a header key and ':' ('title: ...'), a colour key ('A  #2e6f8e  teal'), 'row N:', 'note:' or '#'";
+    const run = text.slice(offset, end);
+    const shown = printable(run);
+    const look = lookAlike(run, shown);
+    const d: Diagnostic = {
       severity: 'error',
       id: 'syntax',
-      message: `'${printable(text.slice(offset, end))}' cannot stand here`,
+      message: look ? look.message : `'${shown}' cannot stand here`,
       range,
-      hint: inRow
-        ? "a row holds units of colour keys A-Z (optionally after '*' or '+'), groups like '(AB CB)x2', skips '-', and a comment after '#'"
-        : "a line starts with a header key and ':' ('title: ...'), a colour key ('A  #2e6f8e  teal'), 'row N:', 'note:' or '#'",
+      hint: look?.hint ?? hint,
     };
+    const r = look?.replacement;
+    if (r !== undefined) d.fix = { title: r === '' ? 'delete it' : `write '${r}'`, range, replacement: r };
+    return d;
   });
   return { tokens, comments: result.groups.comments ?? [], diagnostics };
 }
