@@ -92,6 +92,11 @@ export interface PatternText {
 export async function readPattern(path: string, io: CliIO): Promise<PatternText | { error: string }> {
   const input = await readInput(path, io);
   if ('error' in input) return input;
+  return decodePattern(input);
+}
+
+/** Bytes already read as text for the parser, with the same words for bytes that are not text. */
+export async function decodePattern(input: Input): Promise<PatternText> {
   let text: string | null = null;
   try {
     text = new TextDecoder('utf-8', { fatal: true }).decode(input.bytes);

@@ -14,7 +14,7 @@ import { hasErrors } from '../../shared/diagnostic.js';
 import type { Model } from '../../shared/model.js';
 import { buildSteps } from '../../shared/steps.js';
 import { renderStepsMarkdown } from '../../shared/steps-render.js';
-import { cannotRead } from '../read-input.js';
+import { cannotRead, decodePattern } from '../read-input.js';
 import { renderChartFiles } from '../render/chart-files.js';
 import { DEFAULT_DPI } from '../render/png.js';
 import { writeFileAtomic } from './atomic-write.js';
@@ -119,16 +119,9 @@ export async function convertOne(task: ConvertTask): Promise<FileResult> {
     if (stamp) return { rel: task.rel, status: 'skipped' };
   }
 
-  let text: string;
-  try {
-    text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
-  } catch {
-    return {
-      rel: task.rel,
-      status: 'failed',
-      message: `${task.rel}:1:1: error[not-text]: this file is not UTF-8 text`,
-    };
-  }
+  // Decoded as `check` decodes, so a file that is not text is called the same thing by both.
+  const { text, diagnostics: notText } = await decodePattern({ file: task.rel, bytes });
+  if (notText[0]) return { rel: task.rel, status: 'failed', message: errorLine(task.rel, notText[0]) };
   let compiled: ReturnType<typeof compile>;
   let outputs: Array<[OutputFormat, string | Uint8Array]>;
   try {

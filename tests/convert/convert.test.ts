@@ -5,6 +5,8 @@ import { join } from 'node:path';
 import { convertPaths, type ConvertSummary } from '../../bin/convert/index.js';
 import { writeFileAtomic } from '../../bin/convert/atomic-write.js';
 import { isWellFormed } from '../chart/svg-tree.js';
+import { run as check } from '../../bin/commands/check.js';
+import { fakeIO } from '../cli/fake-io.js';
 import { BROKEN, FAN, TUBE } from './patterns.js';
 
 let root: string;
@@ -117,6 +119,35 @@ describe('convert a folder', () => {
     const summary = await convert(['patterns/**/h*.ffp'], { formats: ['json'] });
     expect(summary.files.map((f) => [f.rel, f.status])).toEqual([['tubes/heron.ffp', 'converted']]);
     expect(await listFiles(outDir())).toEqual(['tubes/heron.hash', 'tubes/heron.json']);
+  });
+});
+
+describe('a file that is not text', () => {
+  /** The message `check --format json` gives the same file. */
+  async function checkSays(rel: string): Promise<string> {
+    const io = fakeIO({ cwd: inDir() });
+    await check({ name: 'check', operands: [rel], options: { format: 'json' } }, io);
+    const report = JSON.parse(io.out()) as { files: Array<{ diagnostics: Array<{ id: string; message: string }> }> };
+    const [first] = report.files[0]!.diagnostics;
+    return `${rel}:1:1: error[${first!.id}]: ${first!.message}`;
+  }
+
+  test('is called what check calls it: binary data, or not UTF-8', async () => {
+    // 23 bytes of text, then a zero byte: the 24th.
+    await writeFile(
+      join(inDir(), 'photo.ffp'),
+      Buffer.concat([Buffer.from('title: not a pattern ok'), Buffer.from([0, 1])]),
+    );
+    // 0xff never occurs in UTF-8 (RFC 3629, section 1).
+    await writeFile(join(inDir(), 'latin.ffp'), Buffer.from([0x74, 0x69, 0x74, 0x6c, 0x65, 0x3a, 0x20, 0xff, 0x0a]));
+    const summary = await convert(['patterns'], { formats: ['svg'] });
+    const says = (rel: string) => summary.files.find((f) => f.rel === rel);
+    expect(says('photo.ffp')).toEqual({ rel: 'photo.ffp', status: 'failed', message: await checkSays('photo.ffp') });
+    expect(says('photo.ffp')?.message).toContain('binary data (a zero byte at byte 24)');
+    expect(says('latin.ffp')).toEqual({ rel: 'latin.ffp', status: 'failed', message: await checkSays('latin.ffp') });
+    expect(says('latin.ffp')?.message).toContain('not UTF-8 text');
+    expect(await listFiles(outDir())).not.toContain('photo.svg');
+    expect(summary.exitCode).toBe(1);
   });
 });
 
