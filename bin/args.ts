@@ -68,6 +68,8 @@ export function parseColorDistance(text: string): number {
 }
 
 const CONVERT_FORMATS = ['svg', 'png', 'md', 'json'] as const;
+// PNG is opt-in: rasterising costs some twenty times what all the text outputs together do.
+const CONVERT_DEFAULT_FORMATS = ['svg', 'md', 'json'] as const;
 
 /** `svg,png` -> ['svg', 'png'], each checked, no repeats. */
 export function parseFormatList(text: string): string[] {
@@ -116,8 +118,8 @@ const withMaterials = (cmd: Command): Command =>
     );
 const serverOption = (what = 'address of the viewer (default: the one saved by login)') =>
   new Option('--server <url>', what).argParser(parseUrl);
-const portOption = (def: number) =>
-  new Option('--port <port>', 'port to listen on (0 picks a free one)').argParser(integerIn(0, 65535)).default(def);
+const portOption = (def: number, what = 'port to listen on (0 picks a free one)') =>
+  new Option('--port <port>', what).argParser(integerIn(0, 65535)).default(def);
 
 /** Commander's attribute names where a unit belongs in the name. */
 const RENAME: Record<string, string> = { workingLength: 'workingLengthMm', tail: 'tailMm' };
@@ -194,7 +196,7 @@ function define(program: Command, done: (cmd: ParsedCommand) => void): void {
     .addOption(
       new Option('--formats <list>', `comma-separated outputs: ${CONVERT_FORMATS.join(',')}`)
         .argParser(parseFormatList)
-        .default([...CONVERT_FORMATS], CONVERT_FORMATS.join(',')),
+        .default([...CONVERT_DEFAULT_FORMATS], CONVERT_DEFAULT_FORMATS.join(',')),
     )
     .addOption(new Option('--jobs <n>', 'files converted at once (default: all cores)').argParser(integerIn(1, 256)))
     .option('--force', 'convert even when an output is up to date')
@@ -207,10 +209,10 @@ function define(program: Command, done: (cmd: ParsedCommand) => void): void {
     .addOption(formatOption(['text', 'json'], 'text'))
     .action(finish('preview'));
 
-  command('serve', 'run the full web viewer (needs MariaDB)')
-    .addOption(portOption(8080))
+  command('serve', 'serve the web viewer and its API (starts a private MariaDB unless DATABASE_URL is set)')
+    .addOption(portOption(8080, 'port on 127.0.0.1, 0 picks a free one (PORT also sets it)'))
     .option('--demo', 'fill an empty database with demo accounts and patterns')
-    .option('--examples <dir>', 'folder of patterns to load for the demo')
+    .option('--examples <dir>', 'folder of patterns to seed the demo with; also converted into out/')
     .addOption(formatOption(['text', 'json'], 'text'))
     .action(finish('serve'));
 

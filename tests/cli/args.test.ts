@@ -168,7 +168,7 @@ describe('parseArgs: each command', () => {
   it('convert: --out is required; --formats is checked; --jobs and --force', () => {
     expect(ok('convert', 'patterns', '*.ffp', '--out', 'site').options).toEqual({
       out: 'site',
-      formats: ['svg', 'png', 'md', 'json'],
+      formats: ['svg', 'md', 'json'],
       format: 'text',
     });
     const c = ok('convert', 'a', '--out', 'o', '--formats', 'svg,json,svg', '--jobs', '2', '--force');
