@@ -11,10 +11,11 @@ import { DiagnosticList } from './limits.js';
 import { suggest } from './suggest.js';
 import { COLORS_KEYS, HEADER_KEYS, NOTE_KEY } from './values.js';
 
-export function checkPattern(ast: PatternAst): DiagnosticList {
+/** `lowerCase` holds the diagnostic of each unit written in lower case, by the unit's offset. */
+export function checkPattern(ast: PatternAst, lowerCase: ReadonlyMap<number, Diagnostic> = new Map()): DiagnosticList {
   const out = new DiagnosticList();
   checkKeys(ast, out);
-  checkColors(ast, out);
+  checkColors(ast, lowerCase, out);
   checkRowNumbers(ast.rows, out);
   for (const row of ast.rows) if (!out.full) checkMarks(row, ast.header.layout, out);
   if (ast.rows.length === 0) {
@@ -45,7 +46,7 @@ function checkKeys(ast: PatternAst, out: Diagnostic[]): void {
   }
 }
 
-function checkColors(ast: PatternAst, out: DiagnosticList): void {
+function checkColors(ast: PatternAst, lowerCase: ReadonlyMap<number, Diagnostic>, out: DiagnosticList): void {
   const first = new Map<string, number>();
   for (const c of ast.colors) {
     const line = first.get(c.key);
@@ -67,9 +68,15 @@ function checkColors(ast: PatternAst, out: DiagnosticList): void {
   for (const row of ast.rows) {
     let reported = 0;
     forEachUnit(row.items, (u) => {
+      const lower = lowerCase.get(u.range.offset);
+      let missing = 0;
       for (let k = 0; k < u.keys.length; k++) {
         const b = bit(u.keys.charCodeAt(k));
         used |= b;
+        if (lower) {
+          missing |= b & ~defined;
+          continue;
+        }
         if ((defined | reported) & b) continue;
         reported |= b;
         const key = u.keys[k]!;
@@ -81,6 +88,9 @@ function checkColors(ast: PatternAst, out: DiagnosticList): void {
           hint: `add a line like '  ${key}  #2e6f8e  teal' under 'colors:', or use one of: ${[...first.keys()].join(' ') || '(none yet)'}`,
         });
       }
+      // A unit in lower case has one diagnostic, which also says which of its keys still need a colour.
+      if (lower && missing)
+        lower.hint += `; ${keyList(missing)} ${missing & (missing - 1) ? 'are' : 'is'} not in the 'colors:' block yet`;
     });
   }
   for (const c of ast.colors) {
@@ -96,6 +106,13 @@ function checkColors(ast: PatternAst, out: DiagnosticList): void {
 }
 
 const bit = (code: number): number => 1 << (code - 65);
+
+/** `'X'`, `'X' and 'Y'`, ... for the keys in a mask, in alphabetical order. */
+function keyList(mask: number): string {
+  const keys: string[] = [];
+  for (let k = 0; k < 26; k++) if (mask & (1 << k)) keys.push(`'${String.fromCharCode(65 + k)}'`);
+  return keys.length === 1 ? keys[0]! : `${keys.slice(0, -1).join(', ')} and ${keys[keys.length - 1]}`;
+}
 
 /** A part of a one-line range, `at` code units in, `length` long (keys are ASCII, so units are columns). */
 const narrow = (r: SourceRange, at: number, length: number): SourceRange => ({

@@ -8,7 +8,16 @@ import type { ColorDef, Comment, HeaderEntry, NoteNode, PatternAst, RowNode } fr
 import type { DiagnosticList } from './limits.js';
 import type { LineIndex } from './positions.js';
 import { didYouMean } from './suggest.js';
-import { badColor, colorHex, COLORS_KEYS, HEADER_KEYS, NOTE_KEY, readHeader, ROW_WORDS } from './values.js';
+import {
+  badColor,
+  colorHex,
+  COLORS_KEYS,
+  HEADER_KEYS,
+  LOWER_CASE_HINT,
+  NOTE_KEY,
+  readHeader,
+  ROW_WORDS,
+} from './values.js';
 
 /** One line as the CST visitor reads it, before it is placed. */
 export type Line = KeyLine | ColorLine | RowLine;
@@ -157,6 +166,7 @@ function colorLine(
       id: 'syntax',
       message: `colour keys are capital letters: '${line.word}' should be '${key}'`,
       range: line.wordRange,
+      hint: LOWER_CASE_HINT,
       fix: { title: `write '${key}'`, range: line.wordRange, replacement: key },
     });
   }

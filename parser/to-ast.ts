@@ -5,14 +5,14 @@
  * number or ':', an unclosed group, a lower-case key) are reported here.
  */
 import type { CstElement, CstNode, IToken } from 'chevrotain';
-import type { SourceRange } from '../shared/diagnostic.js';
+import type { Diagnostic, SourceRange } from '../shared/diagnostic.js';
 import type { Comment, GroupNode, ItemNode, PatternAst, RowNode } from './ast.js';
 import { parser } from './grammar.js';
 import type { LineIndex } from './positions.js';
 import { placeLines, type Line } from './place-lines.js';
 import { DiagnosticList } from './limits.js';
 import { suggest } from './suggest.js';
-import { ROW_WORDS } from './values.js';
+import { LOWER_CASE_HINT, ROW_WORDS } from './values.js';
 
 type Children = Record<string, CstElement[] | undefined>;
 
@@ -30,6 +30,8 @@ const BaseVisitor = parser.getBaseCstVisitorConstructor();
 
 class AstBuilder extends BaseVisitor {
   readonly diagnostics = new DiagnosticList();
+  /** The lower-case diagnostic of each unit written in lower case, by the unit's offset (see `checks.ts`). */
+  readonly lowerCase = new Map<number, Diagnostic>();
   private readonly keyStrings = new Map<number, string>();
 
   constructor(private readonly ix: LineIndex) {
@@ -236,13 +238,16 @@ class AstBuilder extends BaseVisitor {
       }
       const keys = lower ? written.toUpperCase() : written;
       if (lower) {
-        this.diagnostics.push({
+        const d: Diagnostic = {
           severity: 'error',
           id: 'syntax',
           message: `colour keys are capital letters: '${mark}${written}' should be '${mark}${keys}'`,
           range,
+          hint: LOWER_CASE_HINT,
           fix: { title: `write '${mark}${keys}'`, range, replacement: mark + keys },
-        });
+        };
+        this.diagnostics.push(d);
+        this.lowerCase.set(offset, d);
       }
       if (keys.length > 4) {
         this.error(
@@ -357,7 +362,7 @@ export function toAst(
   cst: CstNode,
   ix: LineIndex,
   commentTokens: IToken[],
-): { value: PatternAst; diagnostics: DiagnosticList } {
+): { value: PatternAst; diagnostics: DiagnosticList; lowerCase: ReadonlyMap<number, Diagnostic> } {
   const builder = new AstBuilder(ix);
   const lines = builder.visit(cst) as Line[];
   const diagnostics = builder.diagnostics;
@@ -366,5 +371,5 @@ export function toAst(
     range: ix.range(t.startOffset, endOf(t)),
   }));
   const placed = placeLines(lines, comments, ix, diagnostics);
-  return { value: placed, diagnostics };
+  return { value: placed, diagnostics, lowerCase: builder.lowerCase };
 }

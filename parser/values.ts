@@ -25,6 +25,7 @@ export const ROW_WORDS = ['row', 'rows', 'round', 'rounds'] as const;
 /** Line keys that are not header entries. `colours:` is accepted for `colors:`. */
 export const COLORS_KEYS = ['colors', 'colours'] as const;
 export const NOTE_KEY = 'note';
+export const LOWER_CASE_HINT = 'a colour key is one capital letter A-Z';
 
 /** CSS Color 4 names, lower case, to 0xRRGGBB. */
 const NAMED: ReadonlyMap<string, number> = new Map(Object.entries(colorsNamed as Record<string, number>));

@@ -1,0 +1,26 @@
+/** One problem, one diagnostic: a mistake is not reported again by a later check in other words. */
+import { describe, expect, test } from 'vitest';
+import { parse } from '../../parser/index.js';
+
+const head = 'title: T\ncolors:\n  A #000\n  B #fff\n';
+const found = (rows: string) =>
+  parse(`${head}${rows}`).diagnostics.map((d) => ({ id: d.id, at: `${d.range.line}:${d.range.column}`, d }));
+
+describe('one problem, one diagnostic', () => {
+  test('a lower-case key is not also an unknown colour; the hint names the keys still missing', () => {
+    const ds = found('row 1: zzzz BBB\nrow 2: AA\n');
+    expect(ds.map(({ id, at }) => `${id}@${at}`)).toEqual(['syntax@5:8']);
+    expect(ds[0]!.d.message).toBe("colour keys are capital letters: 'zzzz' should be 'ZZZZ'");
+    expect(ds[0]!.d.hint).toBe("a colour key is one capital letter A-Z; 'Z' is not in the 'colors:' block yet");
+  });
+
+  test('a lower-case key of a defined colour only says to use capitals', () => {
+    const [d, ...rest] = found('row 1: aaaa BBB\n');
+    expect(rest).toEqual([]);
+    expect(d!.d.hint).toBe('a colour key is one capital letter A-Z');
+  });
+
+  test('an undefined key written in capitals is still reported', () => {
+    expect(found('row 1: AAAA ZZZ\nrow 2: BB\n').map(({ id }) => id)).toEqual(['unknown-color']);
+  });
+});
