@@ -154,8 +154,11 @@ class AstBuilder extends BaseVisitor {
     return { kind: 'row', row, end: real(lineEnd) ? lineEnd.startOffset : row.range.endOffset };
   }
 
-  /** The unit list of a row or group, in source order; a row's stray ')' is reported in place. */
-  private items(ctx: Children, row: boolean): ItemNode[] {
+  /**
+   * The unit list of a row or group, in source order; a row's stray ')' is
+   * reported in place. `count` is a repeat count already read as the group's own.
+   */
+  private items(ctx: Children, row: boolean, count?: IToken): ItemNode[] {
     const toks = tokens(ctx, 'BodyToken');
     const groups = nodes(ctx, 'group');
     const strays = row ? tokens(ctx, 'RParen') : NONE;
@@ -167,7 +170,7 @@ class AstBuilder extends BaseVisitor {
       if (!('image' in el)) {
         const group = this.visit(el) as GroupNode | undefined;
         if (group) items.push(group);
-      } else if (!real(el)) continue;
+      } else if (!real(el) || el === count) continue;
       else if (el.tokenType.name === 'Units') this.units(el, items);
       else if (el.tokenType.name === 'RParen') {
         this.error(
@@ -306,12 +309,30 @@ class AstBuilder extends BaseVisitor {
   group(ctx: Children): GroupNode | undefined {
     const open = tokens(ctx, 'LParen')[0];
     if (!real(open)) return undefined;
-    const items = this.items(ctx, false);
     const close = tokens(ctx, 'RParen').find(real);
-    const times = tokens(ctx, 'Times').find(real);
+    // `(AB CB x2`: the count inside an unclosed group is where its ')' was meant.
+    const unclosedCount = close
+      ? undefined
+      : tokens(ctx, 'BodyToken').find((t) => real(t) && t.tokenType.name === 'Times');
+    const items = this.items(ctx, false, unclosedCount);
+    const times = tokens(ctx, 'Times').find(real) ?? unclosedCount;
     const openRange = this.range(open);
     let count = 1;
-    if (!close)
+    if (unclosedCount) {
+      const at = this.ix.range(unclosedCount.startOffset, unclosedCount.startOffset);
+      const opened =
+        openRange.line === at.line
+          ? `column ${openRange.column}`
+          : `line ${openRange.line}, column ${openRange.column}`;
+      this.diagnostics.push({
+        severity: 'error',
+        id: 'syntax',
+        message: `')' is missing before '${unclosedCount.image}': the group opened at ${opened} is not closed`,
+        range: this.range(unclosedCount),
+        hint: "close the group right before its count, like '(AB CB)x2'",
+        fix: { title: "insert ')'", range: at, replacement: ')' },
+      });
+    } else if (!close)
       this.error(openRange, "this group '(' is not closed", "close it with ')' and a repeat count, like '(AB CB)x2'");
     else if (!times)
       this.error(
@@ -327,7 +348,7 @@ class AstBuilder extends BaseVisitor {
     if (items.length === 0) this.error(openRange, 'this group is empty', "put the units to repeat inside: '(AB CB)x2'");
     const endTok = times ?? close;
     const lastItem = items[items.length - 1];
-    const end = endTok ? endOf(endTok) : lastItem ? lastItem.range.endOffset : endOf(open);
+    const end = Math.max(endTok ? endOf(endTok) : endOf(open), lastItem ? lastItem.range.endOffset : 0);
     const range = this.ix.range(open.startOffset, end);
     return { type: 'group', items, times: count, range };
   }

@@ -24,3 +24,20 @@ describe('one problem, one diagnostic', () => {
     expect(found('row 1: AAAA ZZZ\nrow 2: BB\n').map(({ id }) => id)).toEqual(['unknown-color']);
   });
 });
+
+describe('a group without its )', () => {
+  test('a count inside it is where the ) was meant, and is not also a count without a group', () => {
+    const ds = parse(`${head}row 1: AAAA (BBB x3\n`).diagnostics;
+    expect(ds.map((d) => d.message)).toEqual([
+      "')' is missing before 'x3': the group opened at column 13 is not closed",
+    ]);
+    expect(ds[0]!.fix).toMatchObject({ replacement: ')', range: { line: 5, column: 18, endColumn: 18 } });
+    const group = parse(`${head}row 1: AAAA (BBB x3\n`).value.rows[0]!.items[1]!;
+    expect(group).toMatchObject({ type: 'group', times: 3, items: [{ type: 'unit', keys: 'BBB' }] });
+  });
+
+  test('an unclosed group with no count still says so at its (', () => {
+    const ds = parse(`${head}row 1: AAAA (BBB\n`).diagnostics;
+    expect(ds.map((d) => `${d.message}@${d.range.column}`)).toEqual(["this group '(' is not closed@13"]);
+  });
+});
