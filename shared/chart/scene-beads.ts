@@ -15,6 +15,7 @@ import {
   unitVector,
   type PageTransform,
 } from './geometry.js';
+import type { Box } from './clearance.js';
 import type { BeadPrim, PathPrim, TextPrim } from './scene-types.js';
 import type { Theme } from './themes.js';
 
@@ -22,6 +23,8 @@ import type { Theme } from './themes.js';
 export const BEAD_THICKNESS = 0.36;
 /** Cap height of the font as a share of its size (JetBrains Mono: 730/1000, from memory). */
 export const CAP_HEIGHT = 0.73;
+/** Mono advance as a share of the font size (JetBrains Mono: 600/1000, from memory). */
+export const ADVANCE = 0.6;
 
 export function cells(model: Model, t: PageTransform, theme: Theme): PathPrim[] {
   if (theme.cell === null) return [];
@@ -144,25 +147,45 @@ export function failures(model: Model, t: PageTransform, theme: Theme): PathPrim
     });
 }
 
-/** Unit numbers (1-based in the row) in each cell's hole; `skipFirst` leaves room for a round's number. */
-export function unitNumbers(model: Model, t: PageTransform, theme: Theme, skipFirst: boolean): TextPrim[] {
+/**
+ * Unit numbers (1-based in the row) in each cell's hole; `skipFirst` leaves
+ * room for a round's number. A number that would touch a bead (in a narrow
+ * increase cell of a round) is left out rather than printed over the bead.
+ */
+export function unitNumbers(
+  model: Model,
+  t: PageTransform,
+  theme: Theme,
+  skipFirst: boolean,
+  isClear: (box: Box) => boolean,
+): TextPrim[] {
   const size = round2(0.24 * t.scale);
-  return model.units
-    .filter((unit) => !(skipFirst && unit.index === 1))
-    .map((unit) => {
-      const p = toPage(t, unit);
-      return {
-        kind: 'text',
-        id: `ff-unit-${unit.id}`,
-        role: 'unit-number',
-        x: round2(p.x),
-        y: round2(p.y + (size * CAP_HEIGHT) / 2),
-        size,
-        text: String(unit.index),
-        color: theme.muted,
-        anchor: 'middle',
-        bold: false,
-        data: { unit: unit.id, row: unit.row },
-      };
+  const out: TextPrim[] = [];
+  for (const unit of model.units) {
+    if (skipFirst && unit.index === 1) continue;
+    // The middle of the cell's corners: in a round the unit's own point can sit on its inner bead.
+    const corners = cellOutline(model, unit, t);
+    const p = {
+      x: corners.reduce((sum, c) => sum + c.x, 0) / corners.length,
+      y: corners.reduce((sum, c) => sum + c.y, 0) / corners.length,
+    };
+    const text = String(unit.index);
+    const y = round2(p.y + (size * CAP_HEIGHT) / 2);
+    const half = (text.length * ADVANCE * size) / 2;
+    if (!isClear({ left: p.x - half, right: p.x + half, top: y - size * CAP_HEIGHT, bottom: y })) continue;
+    out.push({
+      kind: 'text',
+      id: `ff-unit-${unit.id}`,
+      role: 'unit-number',
+      x: round2(p.x),
+      y,
+      size,
+      text,
+      color: theme.muted,
+      anchor: 'middle',
+      bold: false,
+      data: { unit: unit.id, row: unit.row },
     });
+  }
+  return out;
 }

@@ -7,8 +7,7 @@ import { colorName } from '../color-name.js';
 import type { Model } from '../model.js';
 import { labelColor } from './contrast.js';
 import { round2 } from './geometry.js';
-import { CAP_HEIGHT } from './scene-beads.js';
-import { ADVANCE } from './scene-rows.js';
+import { ADVANCE, CAP_HEIGHT } from './scene-beads.js';
 import type { HatchPattern, Primitive, TextPrim } from './scene-types.js';
 import type { Theme } from './themes.js';
 

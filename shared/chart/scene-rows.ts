@@ -6,12 +6,9 @@
  */
 import type { Model, Point, RowInfo } from '../model.js';
 import { arrowhead, pointPath, round2, toPage, unitVector, type PageTransform } from './geometry.js';
-import { CAP_HEIGHT } from './scene-beads.js';
+import { ADVANCE, CAP_HEIGHT } from './scene-beads.js';
 import type { PathPrim, Primitive } from './scene-types.js';
 import type { Theme } from './themes.js';
-
-/** Mono advance as a share of the font size (JetBrains Mono: 600/1000, from memory). */
-export const ADVANCE = 0.6;
 
 export const rowNumberSize = (scale: number): number => round2(Math.min(3.2, Math.max(1.6, 0.42 * scale)));
 

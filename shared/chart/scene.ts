@@ -6,6 +6,7 @@
 import type { Result } from '../diagnostic.js';
 import type { Model } from '../model.js';
 import { round2, type PageTransform } from './geometry.js';
+import { beadClearance } from './clearance.js';
 import { BEAD_THICKNESS, beads, cells, cues, failures, unitNumbers } from './scene-beads.js';
 import { legend, SCALE_BAR_HEIGHT, scaleBar, titleBlock } from './scene-margin.js';
 import { gutterWidth, rowNumbers, seam } from './scene-rows.js';
@@ -80,10 +81,13 @@ export function buildScene(model: Model, options: SceneOptions = {}): Result<Sce
   };
   add(cells(model, t, theme));
   add(seam(model, t, theme));
-  add(beads(model, t, theme));
+  const beadItems = beads(model, t, theme);
+  add(beadItems);
   add(failures(model, t, theme));
   add(cues(model, t, theme));
-  if (options.numbers) add(unitNumbers(model, t, theme, model.layout.kind === 'round'));
+  if (options.numbers) {
+    add(unitNumbers(model, t, theme, model.layout.kind === 'round', beadClearance(beadItems, scale)));
+  }
   add(rowNumbers(model, t, theme, pieceLeft));
 
   const diagnostics = [];
