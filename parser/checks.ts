@@ -9,14 +9,16 @@ import type { ItemNode, Layout, PatternAst, RowNode, UnitNode } from './ast.js';
 import { expandRow } from './expand.js';
 import { DiagnosticList } from './limits.js';
 import { suggest } from './suggest.js';
+import type { ShapeErrors } from './to-ast.js';
 import { COLORS_KEYS, HEADER_KEYS, NOTE_KEY } from './values.js';
 
-/** `lowerCase` holds the diagnostic of each unit written in lower case, by the unit's offset. */
-export function checkPattern(ast: PatternAst, lowerCase: ReadonlyMap<number, Diagnostic> = new Map()): DiagnosticList {
+const NO_SHAPE_ERRORS: ShapeErrors = { lowerCase: new Map(), noColon: new Set() };
+
+export function checkPattern(ast: PatternAst, shape: ShapeErrors = NO_SHAPE_ERRORS): DiagnosticList {
   const out = new DiagnosticList();
   checkKeys(ast, out);
-  checkColors(ast, lowerCase, out);
-  checkRowNumbers(ast.rows, out);
+  checkColors(ast, shape.lowerCase, out);
+  checkRowNumbers(ast.rows, shape.noColon, out);
   for (const row of ast.rows) if (!out.full) checkMarks(row, ast.header.layout, out);
   if (ast.rows.length === 0) {
     out.push({
@@ -131,13 +133,18 @@ function forEachUnit(items: readonly ItemNode[], f: (u: UnitNode) => void): void
   }
 }
 
-function checkRowNumbers(rows: readonly RowNode[], out: Diagnostic[]): void {
+function checkRowNumbers(rows: readonly RowNode[], noColon: ReadonlySet<RowNode>, out: Diagnostic[]): void {
   let expected = 1;
   for (const row of rows) {
     const r = row.numberRange;
     if (r.offset === r.endOffset) {
       expected++;
       continue; // no number at all: a syntax error already says so
+    }
+    if (noColon.has(row)) {
+      // The missing ':' is the one error of this line; counting goes on from its number.
+      expected = Math.max(row.from, row.to) + 1;
+      continue;
     }
     const label = row.from === row.to ? `${row.word} ${row.from}` : `${row.word}s ${row.from}-${row.to}`;
     if (row.to < row.from) {

@@ -59,7 +59,7 @@ function parseText(input: string): Result<PatternAst> {
   const parsed = parseTokens(guarded.tokens);
   const ast = toAst(parsed.cst, ix, lexed.comments);
   const tooLarge = unitLimitDiagnostic(ast.value);
-  const checked = tooLarge ? new DiagnosticList(tooLarge) : checkPattern(ast.value, ast.lowerCase);
+  const checked = tooLarge ? new DiagnosticList(tooLarge) : checkPattern(ast.value, ast.shape);
   const diagnostics: Diagnostic[] = [
     ...lexed.diagnostics,
     ...guarded.diagnostics,

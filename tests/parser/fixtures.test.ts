@@ -43,6 +43,7 @@ describe('error fixtures', () => {
     // `too-many-problems` needs over a thousand problems, too long for a golden file (api.test.ts covers it).
     const ids = [
       'syntax',
+      'bead-count',
       'bad-color',
       'bad-header-value',
       'missing-title',

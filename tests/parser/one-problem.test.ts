@@ -1,6 +1,8 @@
 /** One problem, one diagnostic: a mistake is not reported again by a later check in other words. */
 import { describe, expect, test } from 'vitest';
 import { parse } from '../../parser/index.js';
+import { compile } from '../../shared/compile.js';
+import type { Diagnostic } from '../../shared/diagnostic.js';
 
 const head = 'title: T\ncolors:\n  A #000\n  B #fff\n';
 const found = (rows: string) =>
@@ -39,5 +41,23 @@ describe('a group without its )', () => {
   test('an unclosed group with no count still says so at its (', () => {
     const ds = parse(`${head}row 1: AAAA (BBB\n`).diagnostics;
     expect(ds.map((d) => `${d.message}@${d.range.column}`)).toEqual(["this group '(' is not closed@13"]);
+  });
+});
+
+describe('a unit of more than 4 keys and a row without its colon', () => {
+  test("'AAAAA' is one bead-count, from the parser, which the engine does not repeat", () => {
+    const text = `${head}row 1: AAAAA BBB\n`;
+    const expected = ["bead-count@5:8 'AAAAA' has 5 colour keys, but a unit holds at most 4 beads"];
+    const show = (ds: Diagnostic[]) => ds.map((d) => `${d.id}@${d.range.line}:${d.range.column} ${d.message}`);
+    expect(show(parse(text).diagnostics)).toEqual(expected);
+    expect(show(compile(text).diagnostics)).toEqual(expected);
+  });
+
+  test("'row 2 AAA' is one missing ':', not also a wrong row number, and counting goes on from 2", () => {
+    const ids = (rows: string) => parse(`${head}${rows}`).diagnostics.map((d) => `${d.id}@${d.range.line}`);
+    expect(ids('row 2 AAAA BBB\nrow 3: AA\n')).toEqual(['syntax@5']);
+    expect(ids('row 1: AAAA BBB\nrow 2 AAA\nrow 3: AA\n')).toEqual(['syntax@6']);
+    // A wrong number on a row with its ':' is still reported.
+    expect(ids('row 2: AAAA BBB\n')).toEqual(['row-number@5']);
   });
 });
