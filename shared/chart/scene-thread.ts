@@ -8,7 +8,7 @@ import type { Diagnostic, Result } from '../diagnostic.js';
 import { fileStart } from '../diagnostic.js';
 import type { Model, PassKind, Point } from '../model.js';
 import { pointPath, round2, toPage, type PageTransform } from './geometry.js';
-import { CAP_HEIGHT } from './scene-beads.js';
+import { ADVANCE, CAP_HEIGHT } from './scene-beads.js';
 import type { Primitive } from './scene-types.js';
 import type { Theme } from './themes.js';
 
@@ -18,6 +18,9 @@ const dashFor = (kind: PassKind, scale: number): string | undefined =>
     : kind === 'close'
       ? `${round2(0.1 * scale)} ${round2(0.05 * scale)}`
       : `${round2(0.03 * scale)} ${round2(0.05 * scale)}`;
+
+/** Where along a bead its passes' numbers go: off the middle, where the bead's key letter is. */
+const NUMBER_SLOT = 0.2;
 
 /** The bead's two ends on the page, the `from` end first. */
 function ends(model: Model, beadId: number, from: number, t: PageTransform): [Point, Point] | null {
@@ -48,6 +51,7 @@ export function threadOverlay(model: Model, row: number, t: PageTransform, theme
   const seen = new Map<number, number>();
   const width = round2(Math.max(0.25, 0.05 * t.scale));
   const size = round2(Math.max(1.2, 0.16 * t.scale));
+  const digits = String(passes.length).length;
   const out: Primitive[] = [];
   passes.forEach((pass, i) => {
     const e = ends(model, pass.bead, pass.from, t);
@@ -74,12 +78,19 @@ export function threadOverlay(model: Model, row: number, t: PageTransform, theme
       ...(dash === undefined ? {} : { dash }),
       data,
     });
+    // Measured from the same end of the bead whichever way the thread goes, so the passes of one bead
+    // get different places: near one end, near the other, then the same a number's box aside, and so on.
+    const [p0, p1] = Math.abs(b.x - a.x) > 1e-6 ? (a.x < b.x ? [a, b] : [b, a]) : a.y < b.y ? [a, b] : [b, a];
+    const slot = k % 2 === 0 ? NUMBER_SLOT : 1 - NUMBER_SLOT;
+    const side = { x: -(p1.y - p0.y) / len, y: (p1.x - p0.x) / len };
+    const box = Math.abs(side.x) * digits * ADVANCE * size + Math.abs(side.y) * CAP_HEIGHT * size + 0.3;
+    const aside = Math.floor(k / 2) * box;
     out.push({
       kind: 'text',
       id: `ff-thread-${i + 1}-n`,
       role: 'thread-number',
-      x: round2((from.x + to.x) / 2 + n.x * 0.5),
-      y: round2((from.y + to.y) / 2 + n.y * 0.5 + (size * CAP_HEIGHT) / 2),
+      x: round2(p0.x + (p1.x - p0.x) * slot + side.x * aside),
+      y: round2(p0.y + (p1.y - p0.y) * slot + side.y * aside + (size * CAP_HEIGHT) / 2),
       size,
       text: String(i + 1),
       color: theme.thread[pass.kind],
