@@ -40,9 +40,9 @@ function checkKeys(ast: PatternAst, out: Diagnostic[]): void {
     out.push({
       severity: 'warning',
       id: 'unknown-key',
-      message: `'${e.key}' is not a header key Fourfold knows; it is kept but not used.${s.text}`,
+      message: `'${e.key}' is not a header key Fourfold knows${s.text}`,
       range: e.keyRange,
-      hint: `the header keys are: ${HEADER_KEYS.join(', ')}`,
+      hint: `the line is kept but not used; the header keys are: ${HEADER_KEYS.join(', ')}`,
       ...(s.fix ? { fix: s.fix } : {}),
     });
   }

@@ -145,7 +145,7 @@ function colorLine(
   if (line.word.length > 1) {
     const message = inBlock
       ? `'${line.word}' is not a colour key: a key is one capital letter A-Z`
-      : `'${line.word}' is not a header key, a colour or a row.${didYouMean(lower, [...known, ...ROW_WORDS])}`;
+      : `'${line.word}' is not a header key, a colour or a row${didYouMean(lower, [...known, ...ROW_WORDS])}`;
     push(
       line.wordRange,
       message,

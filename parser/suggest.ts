@@ -58,10 +58,10 @@ function before(a: readonly number[], b: readonly number[]): boolean {
   return false;
 }
 
-/** " Did you mean 'x'?" or nothing, to append to a message. */
+/** "; did you mean 'x'?" or nothing, to append to a message (messages end without a full stop). */
 export const didYouMean = (word: string, candidates: Iterable<string>): string => {
   const c = closest(word, candidates);
-  return c === undefined ? '' : ` Did you mean '${c}'?`;
+  return c === undefined ? '' : `; did you mean '${c}'?`;
 };
 
 /** The did-you-mean text and, when there is a suggestion, the fix that writes it over `range`. */
@@ -69,5 +69,5 @@ export function suggest(word: string, candidates: Iterable<string>, range: Sourc
   const c = closest(word, candidates);
   return c === undefined
     ? { text: '' }
-    : { text: ` Did you mean '${c}'?`, fix: { title: `write '${c}'`, range, replacement: c } };
+    : { text: `; did you mean '${c}'?`, fix: { title: `write '${c}'`, range, replacement: c } };
 }

@@ -110,7 +110,7 @@ class AstBuilder extends BaseVisitor {
       this.diagnostics.push({
         severity: 'error',
         id: 'syntax',
-        message: `'${start.image}' is not a word the notation knows.${s.text}`,
+        message: `'${start.image}' is not a word the notation knows${s.text}`,
         range,
         hint: "a row starts with 'row N:' or 'round N:'",
         ...(s.fix ? { fix: s.fix } : {}),

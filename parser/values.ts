@@ -58,7 +58,7 @@ export function badColor(key: string, written: string, range: SourceRange): Diag
   return {
     severity: 'error',
     id: 'bad-color',
-    message: `colour '${key}': '${written}' is not a CSS colour name.${s.text}`,
+    message: `colour '${key}': '${written}' is not a CSS colour name${s.text}`,
     range,
     hint: "use a CSS Color 4 name (like 'teal' or 'rebeccapurple') or a hex colour like '#2e6f8e'",
     ...(s.fix ? { fix: s.fix } : {}),
@@ -72,7 +72,7 @@ function enumError(entry: HeaderEntry, allowed: readonly string[]): Diagnostic {
   return {
     severity: 'error',
     id: 'bad-header-value',
-    message: `'${entry.value}' is not a ${WHAT[entry.key] ?? entry.key}.${s.text}`,
+    message: `'${entry.value}' is not a ${WHAT[entry.key] ?? entry.key}${s.text}`,
     range: entry.valueRange,
     hint: `${entry.key} is one of: ${allowed.join(', ')}`,
     ...(s.fix ? { fix: s.fix } : {}),

@@ -94,7 +94,7 @@ describe('fourfold check', () => {
     // one bead too many (line 10, unit 2 at column 12), a row number that skips 3 (line 11,
     // the '4' at column 5) and a key with no colour (line 11, the 'C' at column 16).
     const expected = [
-      ['broken.ffp:2:1: warning[unknown-key]', "Did you mean 'designer'?"],
+      ['broken.ffp:2:1: warning[unknown-key]', "did you mean 'designer'?"],
       ['broken.ffp:10:12: error[bead-count]', 'Write 2 keys'],
       ['broken.ffp:11:5: error[row-number]', 'expected row 3'],
       ['broken.ffp:11:16: error[unknown-color]', "add a line like '  C"],

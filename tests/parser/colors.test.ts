@@ -49,8 +49,8 @@ describe('CSS Color 4 names (reference: color-name)', () => {
   });
 
   test('an unknown name gets a did-you-mean from the list', () => {
-    expect(paletteOf('tela').diagnostics[0]!.message).toContain("Did you mean 'teal'?");
-    expect(paletteOf('rebecapurple').diagnostics[0]!.message).toContain("Did you mean 'rebeccapurple'?");
+    expect(paletteOf('tela').diagnostics[0]!.message).toContain("; did you mean 'teal'?");
+    expect(paletteOf('rebecapurple').diagnostics[0]!.message).toContain("; did you mean 'rebeccapurple'?");
   });
 
   test('hex colours: #RGB and #RRGGBB in any case, normalised to lower-case #rrggbb', () => {
