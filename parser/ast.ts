@@ -85,6 +85,10 @@ export interface RowNode {
   trailingComment?: Comment;
 }
 
+/** `row 3` or `rows 2-5`, as messages name a row line. */
+export const rowLabel = (row: RowNode): string =>
+  row.from === row.to ? `${row.word} ${row.from}` : `${row.word}s ${row.from}-${row.to}`;
+
 /** The header values with defaults applied; raw entries stay in `entries`. */
 export interface Header {
   title: string;

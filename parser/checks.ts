@@ -5,7 +5,7 @@
  * The bead counts need the weave engine and are checked there.
  */
 import { fileStart, type Diagnostic, type SourceRange } from '../shared/diagnostic.js';
-import type { ItemNode, Layout, PatternAst, RowNode, UnitNode } from './ast.js';
+import { rowLabel, type ItemNode, type Layout, type PatternAst, type RowNode, type UnitNode } from './ast.js';
 import { expandRow } from './expand.js';
 import { DiagnosticList } from './limits.js';
 import { suggest } from './suggest.js';
@@ -146,7 +146,7 @@ function checkRowNumbers(rows: readonly RowNode[], noColon: ReadonlySet<RowNode>
       expected = Math.max(row.from, row.to) + 1;
       continue;
     }
-    const label = row.from === row.to ? `${row.word} ${row.from}` : `${row.word}s ${row.from}-${row.to}`;
+    const label = rowLabel(row);
     if (row.to < row.from) {
       out.push({
         severity: 'error',

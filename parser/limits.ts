@@ -6,7 +6,7 @@
  */
 import type { IToken } from 'chevrotain';
 import type { Diagnostic } from '../shared/diagnostic.js';
-import type { ItemNode, PatternAst } from './ast.js';
+import { rowLabel, type ItemNode, type PatternAst } from './ast.js';
 import type { LineIndex } from './positions.js';
 
 export const MAX_BYTES = 1024 * 1024;
@@ -136,18 +136,31 @@ export function countItems(items: readonly ItemNode[]): number {
   return n;
 }
 
-/** One `too-large` at the row where the expanded pattern passes UNIT_LIMIT. */
+/**
+ * One `too-large` at the row where the expanded pattern passes UNIT_LIMIT. A
+ * range is named whole (`rows 2-40000`), under its label: its length is the likely slip.
+ */
 export function unitLimitDiagnostic(ast: PatternAst): Diagnostic | undefined {
   let total = 0;
   for (const row of ast.rows) {
-    total += countItems(row.items) * Math.max(1, row.to - row.from + 1);
-    if (total > UNIT_LIMIT) {
-      return tooLarge(
-        `the pattern expands to more than ${UNIT_LIMIT.toLocaleString('en')} units by ${row.word} ${row.from}`,
-        row.range,
-        'check the repeat counts and row ranges; a pattern this large is refused',
-      );
-    }
+    const each = countItems(row.items);
+    const rows = Math.max(1, row.to - row.from + 1);
+    total += each * rows;
+    if (total <= UNIT_LIMIT) continue;
+    const limit = `the pattern expands to more than ${UNIT_LIMIT.toLocaleString('en')} units`;
+    const label = rowLabel(row);
+    if (rows === 1)
+      return tooLarge(`${limit} at ${label}`, row.range, 'check the repeat counts; a pattern this large is refused');
+    return tooLarge(
+      `${limit} at ${label}, which repeats ${each.toLocaleString('en')} unit${each === 1 ? '' : 's'} on each of ${rows.toLocaleString('en')} ${row.word}s`,
+      {
+        ...row.range,
+        endLine: row.numberRange.endLine,
+        endColumn: row.numberRange.endColumn,
+        endOffset: row.numberRange.endOffset,
+      },
+      `check the range ${row.from}-${row.to} and the repeat counts; a pattern this large is refused`,
+    );
   }
   return undefined;
 }

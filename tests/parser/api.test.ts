@@ -49,6 +49,17 @@ describe('parse', () => {
     expect(over.diagnostics[0]!.range.line).toBe(6);
   });
 
+  test('a row range past the unit limit is named whole, under its label', () => {
+    const [d, ...rest] = parse(`${head}row 1: AAAA BBB\nrows 2-999999999: AA BB\n`).diagnostics;
+    expect(rest).toEqual([]);
+    expect(d!.message).toBe(
+      'the pattern expands to more than 200,000 units at rows 2-999999999, which repeats 2 units on each of 999,999,998 rows',
+    );
+    expect(d!.range).toMatchObject({ line: 6, column: 1, endColumn: 17 });
+    const one = parse(`${head}row 1: AAAA BBB\nrow 2: (AB)x999999\n`).diagnostics;
+    expect(one.map((x) => x.message)).toEqual(['the pattern expands to more than 200,000 units at row 2']);
+  });
+
   test('diagnostics come sorted by position', () => {
     const r = parse('colors:\n  A tela\nrow 2: QQ\nrow 1: +AAA\n');
     expect(r.diagnostics).toEqual(sortDiagnostics(r.diagnostics));
