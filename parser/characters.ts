@@ -81,6 +81,13 @@ export interface LookAlike {
 }
 
 const MAX_NAMED = 3;
+/** As many characters as a message quotes of a run (the lexer shortens what it shows to the same). */
+export const MAX_QUOTED = 20;
+
+const shorten = (s: string): string => {
+  const cps = [...s];
+  return cps.length <= MAX_QUOTED ? s : `${cps.slice(0, MAX_QUOTED).join('')}…`;
+};
 
 /** `shown` is the run as a message may quote it (shortened, controls made visible). */
 export function lookAlike(run: string, shown: string): LookAlike | undefined {
@@ -108,7 +115,7 @@ export function lookAlike(run: string, shown: string): LookAlike | undefined {
     };
   const wide = known.some((d) => d.kind === 'full-width');
   return {
-    message: `'${shown}' looks like '${replacement}' but is ${listed}`,
+    message: `'${shown}' looks like '${shorten(replacement)}' but is ${listed}`,
     hint: `type '${replacement}' instead${wide ? ', with the keyboard set to plain (half-width) letters' : ''}`,
     replacement,
   };

@@ -57,7 +57,8 @@ function parseText(input: string): Result<PatternAst> {
   const lexed = lex(text, ix);
   const guarded = guardNesting(lexed.tokens, ix);
   const parsed = parseTokens(guarded.tokens);
-  const ast = toAst(parsed.cst, ix, lexed.comments);
+  const strayLines = new Set(lexed.diagnostics.map((d) => d.range.line));
+  const ast = toAst(parsed.cst, ix, lexed.comments, strayLines);
   const tooLarge = unitLimitDiagnostic(ast.value);
   const checked = tooLarge ? new DiagnosticList(tooLarge) : checkPattern(ast.value, ast.shape);
   const diagnostics: Diagnostic[] = [

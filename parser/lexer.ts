@@ -4,7 +4,7 @@
  */
 import { createTokenInstance, Lexer, type IToken } from 'chevrotain';
 import type { Diagnostic } from '../shared/diagnostic.js';
-import { lookAlike } from './characters.js';
+import { lookAlike, MAX_QUOTED } from './characters.js';
 import type { LineIndex } from './positions.js';
 import { ColorKey, HeaderKey, lexerDefinition, LineEnd } from './tokens.js';
 
@@ -76,7 +76,7 @@ function strayRuns(strays: IToken[]): { offset: number; end: number }[] {
 
 /** Shorten and make control characters visible so a message never breaks the terminal. */
 function printable(s: string): string {
-  const shown = [...s].slice(0, 20).join('');
+  const shown = [...s].slice(0, MAX_QUOTED).join('');
   return (
     // eslint-disable-next-line no-control-regex -- control characters are exactly what is matched
     shown.replace(/[\u0000-\u001f\u007f]/g, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`) +

@@ -44,7 +44,11 @@ class AstBuilder extends BaseVisitor {
   readonly shape: ShapeErrors = { lowerCase: new Map(), noColon: new Set() };
   private readonly keyStrings = new Map<number, string>();
 
-  constructor(private readonly ix: LineIndex) {
+  constructor(
+    private readonly ix: LineIndex,
+    /** Lines where the lexer found characters it could not read: a row there may look empty only because of them. */
+    private readonly strayLines: ReadonlySet<number>,
+  ) {
     super();
     this.validateVisitor();
   }
@@ -142,7 +146,7 @@ class AstBuilder extends BaseVisitor {
     const numberRange = n1 ? this.ix.range(n1.startOffset, endOf(n2 ?? n1)) : this.ix.range(endOf(start), endOf(start));
     const lastItem = items[items.length - 1];
     const end = Math.max(lastItem ? lastItem.range.endOffset : 0, endOf(last));
-    if (items.length === 0) {
+    if (items.length === 0 && !this.strayLines.has(this.ix.position(start.startOffset).line)) {
       this.error(
         this.ix.range(endOf(last), endOf(last)),
         `expected a colour key (A-Z), a group '(' or a skip '-' after '${label()}:'`,
@@ -397,8 +401,9 @@ export function toAst(
   cst: CstNode,
   ix: LineIndex,
   commentTokens: IToken[],
+  strayLines: ReadonlySet<number> = new Set(),
 ): { value: PatternAst; diagnostics: DiagnosticList; shape: ShapeErrors } {
-  const builder = new AstBuilder(ix);
+  const builder = new AstBuilder(ix, strayLines);
   const lines = builder.visit(cst) as Line[];
   const diagnostics = builder.diagnostics;
   const comments: Comment[] = commentTokens.map((t) => ({

@@ -33,3 +33,10 @@ describe('look-alike characters', () => {
     expect(syntax('AAAA % BBB').map((d) => d.message)).toEqual(["'%' cannot stand here"]);
   });
 });
+
+test('a long run of full-width letters is quoted short, and the row is not also called empty', () => {
+  const [d, ...rest] = syntax('\uff21'.repeat(50));
+  expect(rest).toEqual([]);
+  expect(d!.message).toBe(`'${'Ａ'.repeat(20)}…' looks like '${'A'.repeat(20)}…' but is U+FF21 (full-width 'A')`);
+  expect(d!.fix).toMatchObject({ replacement: 'A'.repeat(50) });
+});
