@@ -10,6 +10,7 @@
  */
 import { Command, CommanderError, InvalidArgumentError, Option } from 'commander';
 import type { ParsedCommand } from './command.js';
+import { DEFAULT_OUTPUT_FORMATS, OUTPUT_FORMATS } from './convert/formats.js';
 
 export interface ArgsResult {
   value: ParsedCommand | null;
@@ -67,17 +68,13 @@ export function parseColorDistance(text: string): number {
   return n >= 0 && n <= 100 ? n : fail('Expected a colour distance from 0 (never warn) to 100, like 8.');
 }
 
-const CONVERT_FORMATS = ['svg', 'png', 'md', 'json'] as const;
-// PNG is opt-in: rasterising costs some twenty times what all the text outputs together do.
-const CONVERT_DEFAULT_FORMATS = ['svg', 'md', 'json'] as const;
-
 /** `svg,png` -> ['svg', 'png'], each checked, no repeats. */
 export function parseFormatList(text: string): string[] {
   const list = [...new Set(text.split(',').map((s) => s.trim().toLowerCase()))];
-  const bad = list.filter((f) => !(CONVERT_FORMATS as readonly string[]).includes(f));
+  const bad = list.filter((f) => !(OUTPUT_FORMATS as readonly string[]).includes(f));
   return bad.length === 0 && list.length > 0
     ? list
-    : fail(`Unknown format '${bad.join(',')}'. Allowed: ${CONVERT_FORMATS.join(', ')}.`);
+    : fail(`Unknown format '${bad.join(',')}'. Allowed: ${OUTPUT_FORMATS.join(', ')}.`);
 }
 
 export function parseUrl(text: string): string {
@@ -194,9 +191,9 @@ function define(program: Command, done: (cmd: ParsedCommand) => void): void {
     .argument('<paths...>', 'files, folders or glob patterns')
     .requiredOption('--out <dir>', 'output folder (the input tree is mirrored inside it)')
     .addOption(
-      new Option('--formats <list>', `comma-separated outputs: ${CONVERT_FORMATS.join(',')}`)
+      new Option('--formats <list>', `comma-separated outputs: ${OUTPUT_FORMATS.join(',')}`)
         .argParser(parseFormatList)
-        .default([...CONVERT_DEFAULT_FORMATS], CONVERT_DEFAULT_FORMATS.join(',')),
+        .default([...DEFAULT_OUTPUT_FORMATS], DEFAULT_OUTPUT_FORMATS.join(',')),
     )
     .addOption(new Option('--jobs <n>', 'files converted at once (default: all cores)').argParser(integerIn(1, 256)))
     .option('--force', 'convert even when an output is up to date')

@@ -20,8 +20,9 @@ import { DEFAULT_DPI } from '../render/png.js';
 import { writeFileAtomic } from './atomic-write.js';
 import { PATTERN_EXT } from './find-inputs.js';
 
-export type OutputFormat = 'svg' | 'png' | 'md' | 'json';
-export const OUTPUT_FORMATS: readonly OutputFormat[] = ['svg', 'png', 'md', 'json'];
+import { OUTPUT_FORMATS, type OutputFormat } from './formats.js';
+
+export { OUTPUT_FORMATS, type OutputFormat };
 
 export interface ConvertTask {
   file: string;

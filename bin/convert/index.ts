@@ -9,10 +9,12 @@ import { fileURLToPath } from 'node:url';
 import { resolve } from 'node:path';
 import { Piscina } from 'piscina';
 import { EXIT_FAILURE, EXIT_OK, EXIT_PATTERN_ERRORS } from '../command.js';
-import { convertOne, OUTPUT_FORMATS, type ConvertTask, type FileResult, type OutputFormat } from './convert-one.js';
+import { convertOne, type ConvertTask, type FileResult } from './convert-one.js';
+import { DEFAULT_OUTPUT_FORMATS, OUTPUT_FORMATS, type OutputFormat } from './formats.js';
 import { findInputs } from './find-inputs.js';
 
-export type { FileResult, OutputFormat } from './convert-one.js';
+export type { FileResult } from './convert-one.js';
+export type { OutputFormat } from './formats.js';
 
 export interface ConvertOptions {
   out: string;
@@ -87,7 +89,7 @@ async function runAll(tasks: ConvertTask[], jobs: number, onResult: (r: FileResu
 export async function convertPaths(paths: readonly string[], options: ConvertOptions): Promise<ConvertSummary> {
   const cwd = options.cwd ?? process.cwd();
   const outDir = resolve(cwd, options.out);
-  const formats = OUTPUT_FORMATS.filter((f) => (options.formats ?? OUTPUT_FORMATS).includes(f));
+  const formats = OUTPUT_FORMATS.filter((f) => (options.formats ?? DEFAULT_OUTPUT_FORMATS).includes(f));
   const { inputs, problems } = await findInputs(paths, cwd);
   const tasks = inputs.map((input) => ({ ...input, outDir, formats, force: options.force === true }));
   options.onStart?.(tasks.length);

@@ -4,6 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { convertPaths, type ConvertSummary } from '../../bin/convert/index.js';
 import { writeFileAtomic } from '../../bin/convert/atomic-write.js';
+import { DEFAULT_OUTPUT_FORMATS, OUTPUT_FORMATS } from '../../bin/convert/formats.js';
 import { isWellFormed } from '../chart/svg-tree.js';
 import { run as check } from '../../bin/commands/check.js';
 import { fakeIO } from '../cli/fake-io.js';
@@ -23,8 +24,9 @@ async function listFiles(dir: string): Promise<string[]> {
 
 const mtimes = async (files: string[]) => Promise.all(files.map(async (f) => (await stat(join(outDir(), f))).mtimeMs));
 
+// Every format, PNG included, so each test covers every writer.
 const convert = (paths: string[], extra: Partial<Parameters<typeof convertPaths>[1]> = {}): Promise<ConvertSummary> =>
-  convertPaths(paths, { out: 'out', cwd: root, jobs: 2, ...extra });
+  convertPaths(paths, { out: 'out', cwd: root, jobs: 2, formats: OUTPUT_FORMATS, ...extra });
 
 beforeEach(async () => {
   root = await mkdtemp(join(tmpdir(), 'fourfold-convert-'));
@@ -158,5 +160,15 @@ describe('atomic writes', () => {
     await expect(writeFileAtomic(target, '<svg/>')).rejects.toThrow();
     expect(await readdir(root)).toEqual(['chart.svg', 'patterns']);
     expect((await stat(target)).isDirectory()).toBe(true);
+  });
+});
+
+describe('default formats', () => {
+  test('without --formats: the chart, the steps and the model, no PNG', async () => {
+    const summary = await convertPaths(['patterns/fan.ffp'], { out: 'out', cwd: root, jobs: 1 });
+    expect(summary.exitCode).toBe(0);
+    const written = (await readdir(outDir())).filter((f) => !f.endsWith('.hash')).sort();
+    expect(written).toEqual(DEFAULT_OUTPUT_FORMATS.map((f) => `fan.${f}`).sort());
+    expect(written).not.toContain('fan.png');
   });
 });

@@ -11,6 +11,7 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { convertPaths } from '../../bin/convert/index.js';
+import { OUTPUT_FORMATS } from '../../bin/convert/formats.js';
 import { BROKEN, FAN, TUBE } from './patterns.js';
 
 const built = resolve('dist/bin/convert/index.js');
@@ -35,8 +36,8 @@ test(
   async () => {
     expect(existsSync(built), 'dist/ is missing: run npm run build:cli first').toBe(true);
     const { convertPaths: pooled } = (await import(pathToFileURL(built).href)) as { convertPaths: typeof convertPaths };
-    const a = await pooled(['in'], { out: 'pool', cwd: root, jobs: 2 });
-    const b = await convertPaths(['in'], { out: 'single', cwd: root, jobs: 1 });
+    const a = await pooled(['in'], { out: 'pool', cwd: root, jobs: 2, formats: OUTPUT_FORMATS });
+    const b = await convertPaths(['in'], { out: 'single', cwd: root, jobs: 1, formats: OUTPUT_FORMATS });
     expect([a.converted, a.failed, a.exitCode]).toEqual([7, 1, 1]);
     expect(a.files.map((f) => f.status)).toEqual(b.files.map((f) => f.status));
     const files = (await readdir(join(root, 'pool'), { recursive: true }))
