@@ -12,7 +12,7 @@ import { suggest } from './suggest.js';
 import type { ShapeErrors } from './to-ast.js';
 import { COLORS_KEYS, HEADER_KEYS, NOTE_KEY } from './values.js';
 
-const NO_SHAPE_ERRORS: ShapeErrors = { lowerCase: new Map(), noColon: new Set() };
+const NO_SHAPE_ERRORS: ShapeErrors = { lowerCase: new Map(), noColon: new Set(), colonLookAlikes: new Set() };
 
 export function checkPattern(ast: PatternAst, shape: ShapeErrors = NO_SHAPE_ERRORS): DiagnosticList {
   const out = new DiagnosticList();

@@ -61,8 +61,10 @@ function parseText(input: string): Result<PatternAst> {
   const ast = toAst(parsed.cst, ix, lexed.comments, strayLines);
   const tooLarge = unitLimitDiagnostic(ast.value);
   const checked = tooLarge ? new DiagnosticList(tooLarge) : checkPattern(ast.value, ast.shape);
+  const lookAlikeColon = (d: Diagnostic): boolean =>
+    d.range.endOffset === d.range.offset + 1 && ast.shape.colonLookAlikes.has(d.range.offset);
   const diagnostics: Diagnostic[] = [
-    ...lexed.diagnostics,
+    ...lexed.diagnostics.filter((d) => !lookAlikeColon(d)),
     ...guarded.diagnostics,
     ...parsed.errors.map((e): Diagnostic => ({
       severity: 'error',

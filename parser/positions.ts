@@ -60,6 +60,11 @@ export class LineIndex {
     return n;
   }
 
+  /** The `length` code units of the text from `offset`. */
+  textAt(offset: number, length: number): string {
+    return this.text.slice(offset, offset + length);
+  }
+
   /** A range over code-unit offsets [offset, endOffset). */
   range(offset: number, endOffset: number): SourceRange {
     const a = this.position(offset);

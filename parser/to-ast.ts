@@ -29,19 +29,24 @@ const real = (t: IToken | undefined): t is IToken =>
 /**
  * Shape errors the later checks must know of, so one mistake gets one
  * diagnostic: a unit in lower case (its diagnostic, by the unit's offset,
- * also names its undefined keys), and rows without their ':' (whose number
- * is not checked, as the line may not be read as meant).
+ * also names its undefined keys), rows without their ':' (whose number
+ * is not checked, as the line may not be read as meant), and the offsets of
+ * characters typed for a row's ':' (which the lexer does not report again).
  */
 export interface ShapeErrors {
   lowerCase: Map<number, Diagnostic>;
   noColon: Set<RowNode>;
+  colonLookAlikes: Set<number>;
 }
+
+/** Typed where a row's ':' belongs; each is a stray to the lexer. */
+const COLON_LOOK_ALIKES = [',', ';', '.', '\uff1a'];
 
 const BaseVisitor = parser.getBaseCstVisitorConstructor();
 
 class AstBuilder extends BaseVisitor {
   readonly diagnostics = new DiagnosticList();
-  readonly shape: ShapeErrors = { lowerCase: new Map(), noColon: new Set() };
+  readonly shape: ShapeErrors = { lowerCase: new Map(), noColon: new Set(), colonLookAlikes: new Set() };
   private readonly keyStrings = new Map<number, string>();
 
   constructor(
@@ -131,14 +136,18 @@ class AstBuilder extends BaseVisitor {
         "write it like 'row 3: AB CB'",
       );
     if (!colon) {
-      const at = this.ix.range(endOf(last), endOf(last));
+      const after = endOf(last);
+      // `row 4, AB` or `row 4：AB`: the character typed for the ':' is the one problem, not also a stray.
+      const typed = COLON_LOOK_ALIKES.find((c) => this.ix.textAt(after, c.length) === c);
+      const at = this.ix.range(after, after + (typed?.length ?? 0));
+      if (typed) this.shape.colonLookAlikes.add(after);
       this.diagnostics.push({
         severity: 'error',
         id: 'syntax',
-        message: `expected ':' after '${label()}'`,
+        message: `expected ':' after '${label()}'${typed ? `, not '${typed}'` : ''}`,
         range: at,
         hint: `write '${label()}: ' before the units`,
-        fix: { title: "insert ':'", range: at, replacement: ':' },
+        fix: { title: typed ? "write ':'" : "insert ':'", range: at, replacement: ':' },
       });
     }
     if (colon) last = colon;

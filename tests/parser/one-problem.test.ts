@@ -61,3 +61,19 @@ describe('a unit of more than 4 keys and a row without its colon', () => {
     expect(ids('row 2: AAAA BBB\n')).toEqual(['row-number@5']);
   });
 });
+
+describe('the start of a row line', () => {
+  test("'row2:' is read as row 2, not as an unknown header key after a row", () => {
+    const r = parse(`${head}row 1: AAAA BBB\nrow2: AA BB\n`);
+    expect(r.diagnostics).toEqual([]);
+    expect(r.value.rows.map((x) => x.from)).toEqual([1, 2]);
+  });
+
+  test("a ',' or a full-width '：' typed for the ':' is one error, with a fix that writes ':'", () => {
+    for (const c of [',', ';', '.', '\uff1a']) {
+      const ds = parse(`${head}row 1${c} AAAA BBB\n`).diagnostics;
+      expect(ds.map((d) => d.message)).toEqual([`expected ':' after 'row 1', not '${c}'`]);
+      expect(ds[0]!.fix).toMatchObject({ replacement: ':', range: { column: 6, endColumn: 7 } });
+    }
+  });
+});
