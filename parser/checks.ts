@@ -70,7 +70,8 @@ function checkColors(ast: PatternAst, lowerCase: ReadonlyMap<number, Diagnostic>
   for (const row of ast.rows) {
     let reported = 0;
     forEachUnit(row.items, (u) => {
-      const lower = lowerCase.get(u.range.offset);
+      // Most files have no lower-case unit: no lookup per unit then.
+      const lower = lowerCase.size === 0 ? undefined : lowerCase.get(u.range.offset);
       let missing = 0;
       for (let k = 0; k < u.keys.length; k++) {
         const b = bit(u.keys.charCodeAt(k));
