@@ -12,7 +12,8 @@ import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
-import { chromium, type Browser } from 'playwright-core';
+import type { Browser } from 'playwright-core';
+import { launchChromium } from './chromium.js';
 import { renderChartSvg } from '../bin/render/chart-files.js';
 import { startPreview } from '../bin/preview/preview-server.js';
 import { compile } from '../shared/compile.js';
@@ -74,19 +75,7 @@ const bench: Bench = {
     });
     await new Promise<void>((resolve) => files.listen(0, '127.0.0.1', resolve));
     const preview = await startPreview({ path: join(dir, 'round.ffp'), port: 0, webRoot: WEB_DIR });
-    const browser = await chromium.launch({
-      executablePath: '/usr/bin/chromium',
-      headless: true,
-      args: [
-        '--no-sandbox',
-        '--disable-gpu',
-        '--disable-background-networking',
-        '--disable-component-update',
-        '--disable-sync',
-        '--no-first-run',
-        '--disable-quic',
-      ],
-    });
+    const browser = await launchChromium();
     try {
       const staticUrl = `http://127.0.0.1:${(files.address() as AddressInfo).port}/round.svg`;
       const app = await timeToBeads(browser, preview.url, model.beads.length);

@@ -3,31 +3,16 @@
  * Each launch gets a fresh temporary profile (playwright passes its own new
  * --user-data-dir), and each context is as empty as a private window.
  */
-import { existsSync } from 'node:fs';
 import { mkdir } from 'node:fs/promises';
 import { join } from 'node:path';
-import { chromium, type Browser, type Page } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
+import { launchChromium as launchBrowser } from '../../bench/chromium.js';
 
-export const CHROMIUM = '/usr/bin/chromium';
 export const RESULTS = join(process.cwd(), 'test-results');
 
 export async function launchChromium(): Promise<Browser> {
-  if (!existsSync(CHROMIUM))
-    throw new Error(`${CHROMIUM} is missing: install Debian's chromium package (.ci/run does)`);
   await mkdir(RESULTS, { recursive: true });
-  return chromium.launch({
-    executablePath: CHROMIUM,
-    headless: true,
-    args: [
-      '--no-sandbox',
-      '--disable-gpu',
-      '--disable-background-networking',
-      '--disable-component-update',
-      '--disable-sync',
-      '--no-first-run',
-      '--disable-quic',
-    ],
-  });
+  return launchBrowser();
 }
 
 /**
