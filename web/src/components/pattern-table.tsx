@@ -5,6 +5,7 @@
 import { Link } from 'react-router-dom';
 import type { PatternSummary } from '../api/types.js';
 import type { ListParams, SortKey } from '../queries/patterns.js';
+import { ColumnHeader } from './column-header.js';
 
 const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
@@ -72,23 +73,13 @@ export function PatternTable({
         <thead className="border-b border-slate-400">
           <tr>
             <SortHeader label="Title" sort="title" params={params} onSort={onChange} />
-            <th scope="col" className="p-2 text-left">
-              Layout
-            </th>
-            <th scope="col" className="p-2 text-right">
-              Rows
-            </th>
-            <th scope="col" className="p-2 text-right">
-              Units
-            </th>
+            <ColumnHeader label="Layout" />
+            <ColumnHeader label="Rows" align="right" />
+            <ColumnHeader label="Units" align="right" />
             <SortHeader label="Beads" sort="beads" params={params} onSort={onChange} />
-            <th scope="col" className="p-2 text-left">
-              Colours
-            </th>
+            <ColumnHeader label="Colours" />
             <SortHeader label="Updated" sort="updated" params={params} onSort={onChange} />
-            <th scope="col" className="p-2 text-left">
-              Sharing
-            </th>
+            <ColumnHeader label="Sharing" />
           </tr>
         </thead>
         <tbody>

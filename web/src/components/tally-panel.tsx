@@ -4,6 +4,7 @@ import { toolSuggestion } from '../../../shared/kit.js';
 import type { UseQueryResult } from '@tanstack/react-query';
 import type { TallyJson } from '../api/types.js';
 import { QueryError } from './query-error.js';
+import { TableHead } from './column-header.js';
 
 const mmToCm = (mm: number) => `${(mm / 10).toLocaleString(undefined, { maximumFractionDigits: 1 })} cm`;
 
@@ -23,22 +24,14 @@ export function TallyPanel({ tally, beadSize }: { tally: TallyJson; beadSize: st
           <caption className="mb-1 text-left font-semibold">
             Beads per colour (buy amounts include a {Math.round(tally.spare * 100)}% spare)
           </caption>
-          <thead className="border-b border-slate-400">
-            <tr>
-              <th scope="col" className="p-2 text-left">
-                Colour
-              </th>
-              <th scope="col" className="p-2 text-right">
-                Beads
-              </th>
-              <th scope="col" className="p-2 text-right">
-                Grams
-              </th>
-              <th scope="col" className="p-2 text-right">
-                Buy
-              </th>
-            </tr>
-          </thead>
+          <TableHead
+            columns={[
+              { label: 'Colour' },
+              { label: 'Beads', align: 'right' },
+              { label: 'Grams', align: 'right' },
+              { label: 'Buy', align: 'right' },
+            ]}
+          />
           <tbody>
             {tally.colors.map((c) => (
               <tr key={c.key} className="border-b border-slate-200 dark:border-slate-700">
@@ -62,22 +55,14 @@ export function TallyPanel({ tally, beadSize }: { tally: TallyJson; beadSize: st
       <details>
         <summary className="cursor-pointer font-semibold">Beads per row</summary>
         <table className="mt-2 border-collapse text-sm">
-          <thead className="border-b border-slate-400">
-            <tr>
-              <th scope="col" className="p-2 text-right">
-                Row
-              </th>
-              <th scope="col" className="p-2 text-right">
-                Units
-              </th>
-              <th scope="col" className="p-2 text-right">
-                Beads
-              </th>
-              <th scope="col" className="p-2 text-right">
-                Running total
-              </th>
-            </tr>
-          </thead>
+          <TableHead
+            columns={[
+              { label: 'Row', align: 'right' },
+              { label: 'Units', align: 'right' },
+              { label: 'Beads', align: 'right' },
+              { label: 'Running total', align: 'right' },
+            ]}
+          />
           <tbody className="font-mono">
             {tally.rows.map((r) => {
               running += r.beads;

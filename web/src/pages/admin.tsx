@@ -6,6 +6,7 @@ import type { Role } from '../api/types.js';
 import { outboxQuery, usersQuery, useCreateUser, useDeleteUser, useSetRole } from '../queries/users.js';
 import { Field, FormError } from '../components/field.js';
 import { QueryError } from '../components/query-error.js';
+import { TableHead } from '../components/column-header.js';
 import { NotFoundPage } from './not-found.js';
 
 const ROLES: Role[] = ['admin', 'designer', 'tester'];
@@ -39,22 +40,14 @@ function Accounts({ selfId }: { selfId: number }) {
       <FormError error={setRole.error ?? remove.error} />
       <div className="overflow-x-auto">
         <table className="w-full border-collapse text-sm">
-          <thead className="border-b border-slate-400">
-            <tr>
-              <th scope="col" className="p-2 text-left">
-                Name
-              </th>
-              <th scope="col" className="p-2 text-left">
-                E-mail
-              </th>
-              <th scope="col" className="p-2 text-left">
-                Role
-              </th>
-              <th scope="col" className="p-2 text-left">
-                <span className="sr-only">Actions</span>
-              </th>
-            </tr>
-          </thead>
+          <TableHead
+            columns={[
+              { label: 'Name' },
+              { label: 'E-mail' },
+              { label: 'Role' },
+              { label: <span className="sr-only">Actions</span> },
+            ]}
+          />
           <tbody>
             {users.data.items.map((u) => (
               <tr key={u.id} className="border-b border-slate-200 dark:border-slate-700">
