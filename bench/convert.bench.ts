@@ -11,6 +11,7 @@ import { mkdir, mkdtemp, readFile, readdir, rm, stat, writeFile } from 'node:fs/
 import { availableParallelism, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
+import { Worker } from 'node:worker_threads';
 import { convertPaths, type OutputFormat } from '../bin/convert/index.js';
 import { DEFAULT_OUTPUT_FORMATS, OUTPUT_FORMATS } from '../bin/convert/formats.js';
 import type { Bench } from './harness.js';
@@ -73,6 +74,32 @@ async function readAndWrite(root: string, out: string): Promise<number> {
   });
 }
 
+/**
+ * What the file system allows: 4,000 small files written and renamed into
+ * one folder (as 1,000 patterns' outputs are) by one thread, then by two
+ * threads sharing the work. A file system that creates files one at a time
+ * caps every batch writer's speed-up, whatever it does between the files.
+ */
+async function fileCreationMs(root: string, threads: number): Promise<number> {
+  const dir = join(root, `create-${threads}`);
+  await mkdir(dir);
+  const code = `
+    const { writeFileSync, renameSync } = require('node:fs');
+    const { dir, from, to } = require('node:worker_threads').workerData;
+    const data = Buffer.alloc(8000, 32);
+    for (let i = from; i < to; i++) { writeFileSync(dir + '/' + i + '.tmp', data); renameSync(dir + '/' + i + '.tmp', dir + '/' + i); }`;
+  const total = 4 * FILES;
+  const t0 = performance.now();
+  await Promise.all(
+    Array.from({ length: threads }, (_, k) => {
+      const workerData = { dir, from: (k * total) / threads, to: ((k + 1) * total) / threads };
+      const worker = new Worker(code, { eval: true, workerData });
+      return new Promise((done, fail) => worker.on('exit', done).on('error', fail));
+    }),
+  );
+  return performance.now() - t0;
+}
+
 const bench: Bench = {
   name: 'convert',
   async run() {
@@ -91,6 +118,8 @@ const bench: Bench = {
       const baseline = await readAndWrite(root, 'out');
       const withPng = await timed(() => convertOnce(root, availableParallelism(), 'out-png', [...OUTPUT_FORMATS]));
       const withPngBaseline = await readAndWrite(root, 'out-png');
+      const createOne = await fileCreationMs(root, 1);
+      const createTwo = await fileCreationMs(root, 2);
       return [
         {
           name: `convert ${FILES} patterns (default formats ${DEFAULT_OUTPUT_FORMATS.join(',')}): --jobs 1 vs --jobs 2 (speed-up)`,
@@ -111,6 +140,12 @@ const bench: Bench = {
           value: twoCpu / two,
           baseline: oneCpu / one,
           unit: 'cores',
+        },
+        {
+          name: `  the file system's own ceiling: ${4 * FILES} files written and renamed into one folder, 1 thread vs 2 (speed-up)`,
+          value: createOne,
+          baseline: createTwo,
+          unit: 'ms',
         },
         {
           name: `convert ${FILES} patterns (default formats), all ${availableParallelism()} cores, vs reading each and writing files of its outputs' sizes`,

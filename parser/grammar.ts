@@ -6,7 +6,7 @@
  * `to-ast.ts`, which knows enough to say what was meant; recovery stays on for
  * anything else, so one run reports every error.
  */
-import { CstParser, type CstNode, type IToken } from 'chevrotain';
+import { CstParser, type CstNode, type IToken } from './chevrotain.js';
 import {
   allTokens,
   BodyToken,

@@ -2,7 +2,7 @@
  * The lexer: text to tokens plus the comments, with stray characters turned
  * into diagnostics a designer can act on.
  */
-import { createTokenInstance, Lexer, type IToken } from 'chevrotain';
+import { createTokenInstance, Lexer, type IToken } from './chevrotain.js';
 import type { Diagnostic } from '../shared/diagnostic.js';
 import { lookAlike, MAX_QUOTED } from './characters.js';
 import type { LineIndex } from './positions.js';

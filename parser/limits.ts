@@ -4,7 +4,7 @@
  * (ours) groups nested at most 16 deep, so the recursive parser cannot run
  * out of stack on hostile input.
  */
-import type { IToken } from 'chevrotain';
+import type { IToken } from './chevrotain.js';
 import type { Diagnostic } from '../shared/diagnostic.js';
 import { rowLabel, type ItemNode, type PatternAst } from './ast.js';
 import type { LineIndex } from './positions.js';

@@ -4,7 +4,7 @@
  * notes, rows) and attaches comments. Problems only the shape of a line shows (a missing row
  * number or ':', an unclosed group, a lower-case key) are reported here.
  */
-import type { CstElement, CstNode, IToken } from 'chevrotain';
+import type { CstElement, CstNode, IToken } from './chevrotain.js';
 import type { Diagnostic, SourceRange } from '../shared/diagnostic.js';
 import type { Comment, GroupNode, ItemNode, PatternAst, RowNode } from './ast.js';
 import { parser } from './grammar.js';

@@ -5,7 +5,7 @@
  * lines). Keeping the modes in the lexer keeps the grammar small: it only ever
  * sees whole, already classified lines.
  */
-import { createToken, Lexer, type TokenType } from 'chevrotain';
+import { createToken, Lexer, type TokenType } from './chevrotain.js';
 
 const LINE = 'line';
 const ROW = 'row';

@@ -2,7 +2,7 @@
  * What header values and colours mean: the known keys, bead sizes, layouts,
  * key orders and colour spellings of NOTATION.md section 2.
  */
-import { colorsNamed } from 'culori';
+import { colorsNamed } from '../shared/culori.js';
 import type { Diagnostic, SourceRange } from '../shared/diagnostic.js';
 import type { BeadShape, Header, HeaderEntry, KeyOrder, Layout } from './ast.js';
 import { suggest } from './suggest.js';

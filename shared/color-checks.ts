@@ -4,7 +4,7 @@
  * not lie flat (NOTATION.md section 6). Both are warnings: the piece can still
  * be made, the designer should just know.
  */
-import { differenceCiede2000, parse, type Color } from 'culori';
+import { differenceCiede2000, parse, type Color } from './culori.js';
 import type { Diagnostic, SourceRange } from './diagnostic.js';
 import type { PatternAst } from '../parser/ast.js';
 import type { Model, RowInfo } from './model.js';

@@ -3,7 +3,7 @@
  * name (`crimson`) and no shelf name; a beader reading the steps or packing
  * a kit still needs a word, and `#dc143c` is not one.
  */
-import { colorsNamed } from 'culori';
+import { colorsNamed } from './culori.js';
 
 const NAME_OF_HEX = new Map<string, string>();
 // culori lists the names alphabetically, so of two names for one colour (aqua, cyan) the first is kept.

@@ -57,7 +57,7 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
   if (output === undefined) io.stdout.write(bytes);
   else {
     try {
-      await writeFileAtomic(resolve(io.cwd, output), bytes);
+      writeFileAtomic(resolve(io.cwd, output), bytes);
     } catch (error) {
       io.stderr.write(`fourfold: cannot write '${output}': ${ioReason(error)}\n`);
       return EXIT_FAILURE;

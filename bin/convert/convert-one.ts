@@ -5,7 +5,6 @@
  */
 import { createHash } from 'node:crypto';
 import { existsSync, readFileSync } from 'node:fs';
-import { readFile, stat } from 'node:fs/promises';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { compile } from '../../shared/compile.js';
@@ -70,21 +69,16 @@ const outBase = (outDir: string, rel: string): string =>
 const errorLine = (rel: string, d: Diagnostic): string =>
   `${rel}:${d.range.line}:${d.range.column}: error[${d.id}]: ${d.message}`;
 
-async function upToDate(task: ConvertTask, hash: string): Promise<Stamp | null> {
-  const stamp = await readFile(stampPath(task.outDir, task.rel), 'utf8').then(
-    (t) => JSON.parse(t) as Stamp,
-    () => null,
-  );
-  if (stamp?.hash !== hash) return null;
-  const present = await Promise.all(
-    stamp.outputs.map((o) =>
-      stat(join(dirname(stampPath(task.outDir, task.rel)), o)).then(
-        () => true,
-        () => false,
-      ),
-    ),
-  );
-  return present.every(Boolean) ? stamp : null;
+function upToDate(task: ConvertTask, hash: string): Stamp | null {
+  let stamp: Stamp;
+  try {
+    stamp = JSON.parse(readFileSync(stampPath(task.outDir, task.rel), 'utf8')) as Stamp;
+  } catch {
+    return null;
+  }
+  if (stamp.hash !== hash) return null;
+  const dir = dirname(stampPath(task.outDir, task.rel));
+  return stamp.outputs.every((o) => existsSync(join(dir, o))) ? stamp : null;
 }
 
 async function outputsOf(
@@ -105,7 +99,7 @@ async function outputsOf(
 export async function convertOne(task: ConvertTask): Promise<FileResult> {
   let bytes: Buffer;
   try {
-    bytes = await readFile(task.file);
+    bytes = readFileSync(task.file);
   } catch (error) {
     return { rel: task.rel, status: 'io-error', message: cannotRead(task.rel, error).replace(/^fourfold: /, '') };
   }
@@ -115,7 +109,7 @@ export async function convertOne(task: ConvertTask): Promise<FileResult> {
     .update(bytes)
     .digest('hex');
   if (!task.force) {
-    const stamp = await upToDate(task, hash);
+    const stamp = upToDate(task, hash);
     if (stamp?.error !== undefined) return { rel: task.rel, status: 'failed', message: stamp.error, unchanged: true };
     if (stamp) return { rel: task.rel, status: 'skipped' };
   }
@@ -140,7 +134,7 @@ export async function convertOne(task: ConvertTask): Promise<FileResult> {
   const firstError = diagnostics.find((d) => d.severity === 'error');
   const base = outBase(task.outDir, task.rel);
   try {
-    for (const [format, data] of outputs) await writeFileAtomic(`${base}.${format}`, data);
+    for (const [format, data] of outputs) writeFileAtomic(`${base}.${format}`, data);
     const stamp: Stamp = {
       schema: 'fourfold.convert-stamp/1',
       hash,
@@ -148,7 +142,7 @@ export async function convertOne(task: ConvertTask): Promise<FileResult> {
       ...(firstError ? { error: errorLine(task.rel, firstError) } : {}),
     };
     // The stamp goes last: a run cut short before it simply converts the file again.
-    await writeFileAtomic(stampPath(task.outDir, task.rel), `${JSON.stringify(stamp)}\n`);
+    writeFileAtomic(stampPath(task.outDir, task.rel), `${JSON.stringify(stamp)}\n`);
   } catch (error) {
     return {
       rel: task.rel,

@@ -7,6 +7,7 @@ import { existsSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { resolve } from 'node:path';
+import { setImmediate } from 'node:timers/promises';
 import { Piscina } from 'piscina';
 import { EXIT_FAILURE, EXIT_OK, EXIT_PATTERN_ERRORS } from '../command.js';
 import { convertOne, type ConvertTask, type FileResult } from './convert-one.js';
@@ -61,12 +62,14 @@ async function runAll(tasks: ConvertTask[], jobs: number, onResult: (r: FileResu
       const i = next++;
       results[i] = await convert(tasks[i]!);
       onResult(results[i]);
+      // A file converts without ever leaving the microtask queue (its reads and writes are synchronous), so
+      // this thread's lane would keep the event loop from hearing that a worker finished and wants more.
+      if (convert === convertOne) await setImmediate();
     }
   };
   const lanes = Math.max(1, Math.min(jobs, tasks.length));
   const threads = existsSync(workerFile) ? lanes - 1 : 0;
   if (threads === 0) {
-    // In this thread only, still `jobs` files at a time, so reads and writes overlap.
     await Promise.all(Array.from({ length: lanes }, () => lane(convertOne)));
     return results;
   }
