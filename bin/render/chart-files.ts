@@ -6,7 +6,7 @@ import type { Diagnostic } from '../../shared/diagnostic.js';
 import type { Model } from '../../shared/model.js';
 import { buildScene } from '../../shared/chart/scene.js';
 import type { SceneOptions } from '../../shared/chart/scene-types.js';
-import { sceneToSvg } from '../../shared/chart/svg-text.js';
+import { sceneToSvgBytes } from '../../shared/chart/svg-text.js';
 import { embeddedFonts } from './font.js';
 import { DEFAULT_DPI, svgToPng } from './png.js';
 
@@ -16,7 +16,8 @@ export interface ChartFileOptions extends SceneOptions {
 }
 
 export interface ChartFiles {
-  svg: string;
+  /** UTF-8 bytes, as written to a file or sent. */
+  svg: Buffer;
   png?: Buffer;
   /** Problems with the options (a `--thread` row that does not exist); the model's own are in `model.diagnostics`. */
   diagnostics: Diagnostic[];
@@ -25,10 +26,10 @@ export interface ChartFiles {
 export async function renderChartSvg(
   model: Model,
   options: SceneOptions = {},
-): Promise<{ svg: string; diagnostics: Diagnostic[] }> {
+): Promise<{ svg: Buffer; diagnostics: Diagnostic[] }> {
   const scene = buildScene(model, options);
-  const svg = sceneToSvg(scene.value, await embeddedFonts(scene.value.glyphs));
-  return { svg, diagnostics: scene.diagnostics };
+  const bytes = sceneToSvgBytes(scene.value, await embeddedFonts(scene.value.glyphs));
+  return { svg: Buffer.from(bytes.buffer, bytes.byteOffset, bytes.length), diagnostics: scene.diagnostics };
 }
 
 export async function renderChartFiles(model: Model, options: ChartFileOptions = {}): Promise<ChartFiles> {

@@ -9,7 +9,7 @@ import { FONT_FAMILY, fontFiles } from './font.js';
 export const DEFAULT_DPI = 192;
 
 /** The chart's width and height are in mm, so `dpi` alone sets the pixel size. */
-export async function svgToPng(svg: string, dpi = DEFAULT_DPI): Promise<Buffer> {
+export async function svgToPng(svg: string | Buffer, dpi = DEFAULT_DPI): Promise<Buffer> {
   const resvg = new Resvg(svg, {
     dpi,
     font: {

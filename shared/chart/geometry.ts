@@ -42,55 +42,84 @@ export const toPage = (t: PageTransform, p: Point): Point => ({
   y: t.top + (t.maxY - p.y) * t.scale,
 });
 
-export function pointPath(points: readonly Point[], closed: boolean): string {
+/** Points as a flat list (x0, y0, x1, y1, ...): what the polygons of a scene hold, with no object per point. */
+export type FlatPoints = number[];
+
+/** The list rounded in place, as every number of a scene is. */
+export function roundPoints(points: FlatPoints): FlatPoints {
+  for (let i = 0; i < points.length; i++) points[i] = round2(points[i]!);
+  return points;
+}
+
+export function pointPath(points: FlatPoints, closed: boolean): string {
   // Joined rather than appended: the scene keeps every path, and a string built with `+=` is kept as a rope.
-  const parts = points.map((p, i) => `${i === 0 ? 'M' : 'L'}${round2Text(p.x)} ${round2Text(p.y)}`);
+  const parts: string[] = [];
+  for (let i = 0; i < points.length; i += 2)
+    parts.push(`${i === 0 ? 'M' : 'L'}${round2Text(points[i]!)} ${round2Text(points[i + 1]!)}`);
   if (closed) parts.push('Z');
   return parts.join(' ');
 }
 
-const CORNER_PLACES: Record<Corner, [Place, Place]> = {
-  'base|far': ['base', 'far'],
-  'far|top': ['far', 'top'],
-  'top|near': ['top', 'near'],
-  'near|base': ['near', 'base'],
-};
+/** The two places whose beads meet at each corner, in the order of `corners`. */
+const CORNER_PLACES: ReadonlyArray<readonly [Place, Place]> = [
+  ['base', 'far'],
+  ['far', 'top'],
+  ['top', 'near'],
+  ['near', 'base'],
+];
 
 export const corners: readonly Corner[] = ['base|far', 'far|top', 'top|near', 'near|base'];
 
-/** The junction where the unit's beads at the corner's two places meet, if both are there. */
-export function cornerJunction(model: Model, unit: Unit, corner: Corner): number | null {
-  const [pa, pb] = CORNER_PLACES[corner];
+function junctionAt(model: Model, unit: Unit, corner: number): number | null {
+  const [pa, pb] = CORNER_PLACES[corner]!;
   const a = unit.places[pa];
   const b = unit.places[pb];
   if (a === null || a === undefined || b === null || b === undefined) return null;
   const ja = model.beads[a]?.junctions;
   const jb = model.beads[b]?.junctions;
   if (!ja || !jb) return null;
-  for (const j of ja) if (jb.includes(j)) return j;
+  if (ja[0] === jb[0] || ja[0] === jb[1]) return ja[0];
+  if (ja[1] === jb[0] || ja[1] === jb[1]) return ja[1];
   return null;
 }
 
+/** The junction where the unit's beads at the corner's two places meet, if both are there. */
+export const cornerJunction = (model: Model, unit: Unit, corner: Corner): number | null =>
+  junctionAt(model, unit, corners.indexOf(corner));
+
 /**
- * The cell outline on the page. In a round, cells are not squares, so the
- * four corner junctions give the outline when every place is built;
- * elsewhere (and for a failed unit) it is the unit square turned by the
- * unit's angle, which also keeps a tube's closing unit from reaching across
- * the unrolled chart to its far bead at the seam.
+ * The cell outline on the page, corner by corner as a flat list. In a
+ * round, cells are not squares, so the four corner junctions give the
+ * outline when every place is built; elsewhere (and for a failed unit) it
+ * is the unit square turned by the unit's angle, which also keeps a tube's
+ * closing unit from reaching across the unrolled chart to its far bead at
+ * the seam.
  */
-export function cellOutline(model: Model, unit: Unit, t: PageTransform): Point[] {
+export function cellOutline(model: Model, unit: Unit, t: PageTransform): FlatPoints {
   if (model.layout.kind === 'round') {
-    const found = corners.map((c) => cornerJunction(model, unit, c));
-    if (found.every((j) => j !== null)) return found.map((j) => toPage(t, model.junctions[j as number]!));
+    const out: FlatPoints = [];
+    for (let c = 0; c < 4; c++) {
+      const j = junctionAt(model, unit, c);
+      const p = j === null ? undefined : model.junctions[j];
+      if (p === undefined) break;
+      out.push(t.left + (p.x - t.minX) * t.scale, t.top + (t.maxY - p.y) * t.scale);
+    }
+    if (out.length === 8) return out;
   }
   const rad = (unit.angle * Math.PI) / 180;
   const cos = Math.cos(rad) * 0.5;
   const sin = Math.sin(rad) * 0.5;
+  const x = (dx: number): number => t.left + (unit.x + dx - t.minX) * t.scale;
+  const y = (dy: number): number => t.top + (t.maxY - unit.y - dy) * t.scale;
   return [
-    toPage(t, { x: unit.x + cos + sin, y: unit.y + sin - cos }),
-    toPage(t, { x: unit.x + cos - sin, y: unit.y + sin + cos }),
-    toPage(t, { x: unit.x - cos - sin, y: unit.y - sin + cos }),
-    toPage(t, { x: unit.x - cos + sin, y: unit.y - sin - cos }),
+    x(cos + sin),
+    y(sin - cos),
+    x(cos - sin),
+    y(sin + cos),
+    x(-cos - sin),
+    y(-sin + cos),
+    x(-cos + sin),
+    y(-sin - cos),
   ];
 }
 
@@ -102,17 +131,11 @@ export const unitVector = (from: Point, to: Point): Point => {
 };
 
 /** A triangle with its tip at `tip`, pointing along the unit vector `dir`. */
-export function arrowhead(tip: Point, dir: Point, size: number): string {
-  const back = { x: tip.x - dir.x * size, y: tip.y - dir.y * size };
+export function arrowhead(tip: Point, dir: Point, size: number): FlatPoints {
+  const bx = tip.x - dir.x * size;
+  const by = tip.y - dir.y * size;
   const half = size * 0.55;
-  return pointPath(
-    [
-      tip,
-      { x: back.x - dir.y * half, y: back.y + dir.x * half },
-      { x: back.x + dir.y * half, y: back.y - dir.x * half },
-    ],
-    true,
-  );
+  return [tip.x, tip.y, bx - dir.y * half, by + dir.x * half, bx + dir.y * half, by - dir.x * half];
 }
 
 /**

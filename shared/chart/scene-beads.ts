@@ -11,12 +11,13 @@ import {
   nearImage,
   pointPath,
   round2,
+  roundPoints,
   toPage,
   unitVector,
   type PageTransform,
 } from './geometry.js';
 import type { Box } from './clearance.js';
-import type { BeadPrim, PathPrim, TextPrim } from './scene-types.js';
+import type { BeadPrim, PathPrim, PolygonPrim, TextPrim } from './scene-types.js';
 import type { Theme } from './themes.js';
 
 /** Capsule thickness as a share of a unit side: thin enough to leave the cell's hole open. */
@@ -26,16 +27,15 @@ export const CAP_HEIGHT = 0.73;
 /** Mono advance as a share of the font size (JetBrains Mono: 600/1000, from memory). */
 export const ADVANCE = 0.6;
 
-export function cells(model: Model, t: PageTransform, theme: Theme): PathPrim[] {
-  if (theme.cell === null) return [];
+export function cells(model: Model, t: PageTransform, theme: Theme): PolygonPrim[] {
+  const fill = theme.cell;
+  if (fill === null) return [];
   return model.units.map((unit) => ({
-    kind: 'path',
+    kind: 'polygon',
     id: `ff-cell-${unit.id}`,
     role: 'cell',
-    d: pointPath(cellOutline(model, unit, t), true),
-    fill: theme.cell,
-    stroke: null,
-    strokeWidth: 0,
+    points: roundPoints(cellOutline(model, unit, t)),
+    fill,
     data: { unit: unit.id, row: unit.row },
   }));
 }
@@ -83,7 +83,7 @@ export function beads(model: Model, t: PageTransform, theme: Theme): BeadPrim[] 
 }
 
 /** An arrowhead inside the cell by the start corner, pointing along the first new bead. */
-function cue(model: Model, unit: Unit, step: UnitStep, t: PageTransform, theme: Theme): PathPrim | null {
+function cue(model: Model, unit: Unit, step: UnitStep, t: PageTransform, theme: Theme): PolygonPrim | null {
   const junction = cornerJunction(model, unit, step.startCorner);
   const first = unit.places[step.firstPlace];
   if (junction === null || first === null) return null;
@@ -105,19 +105,17 @@ function cue(model: Model, unit: Unit, step: UnitStep, t: PageTransform, theme: 
     y: c.y + inward.y * 0.3 * t.scale + along.y * (0.2 * t.scale + size),
   };
   return {
-    kind: 'path',
+    kind: 'polygon',
     id: `ff-cue-${unit.id}`,
     role: 'cue',
-    d: arrowhead(tip, along, size),
+    points: roundPoints(arrowhead(tip, along, size)),
     fill: theme.cue,
-    stroke: null,
-    strokeWidth: 0,
     data: { unit: unit.id, row: unit.row },
   };
 }
 
-export function cues(model: Model, t: PageTransform, theme: Theme): PathPrim[] {
-  const out: PathPrim[] = [];
+export function cues(model: Model, t: PageTransform, theme: Theme): PolygonPrim[] {
+  const out: PolygonPrim[] = [];
   for (const step of model.steps) {
     const unit = model.units[step.unit];
     if (!step.cue || !unit || unit.failed) continue;
@@ -132,12 +130,21 @@ export function failures(model: Model, t: PageTransform, theme: Theme): PathPrim
   return model.units
     .filter((unit) => unit.failed)
     .map((unit) => {
-      const [a, b, c, d] = cellOutline(model, unit, t);
+      const [ax, ay, bx, by, cx, cy, dx, dy] = cellOutline(model, unit, t) as [
+        number,
+        number,
+        number,
+        number,
+        number,
+        number,
+        number,
+        number,
+      ];
       return {
         kind: 'path',
         id: `ff-failed-${unit.id}`,
         role: 'failed',
-        d: `${pointPath([a!, b!, c!, d!], true)} ${pointPath([a!, c!], false)} ${pointPath([b!, d!], false)}`,
+        d: `${pointPath([ax, ay, bx, by, cx, cy, dx, dy], true)} ${pointPath([ax, ay, cx, cy], false)} ${pointPath([bx, by, dx, dy], false)}`,
         fill: null,
         stroke: theme.failed,
         strokeWidth: round2(Math.max(0.3, 0.06 * t.scale)),
@@ -164,11 +171,8 @@ export function unitNumbers(
   for (const unit of model.units) {
     if (skipFirst && unit.index === 1) continue;
     // The middle of the cell's corners: in a round the unit's own point can sit on its inner bead.
-    const corners = cellOutline(model, unit, t);
-    const p = {
-      x: corners.reduce((sum, c) => sum + c.x, 0) / corners.length,
-      y: corners.reduce((sum, c) => sum + c.y, 0) / corners.length,
-    };
+    const c = cellOutline(model, unit, t);
+    const p = { x: (c[0]! + c[2]! + c[4]! + c[6]!) / 4, y: (c[1]! + c[3]! + c[5]! + c[7]!) / 4 };
     const text = String(unit.index);
     const y = round2(p.y + (size * CAP_HEIGHT) / 2);
     const half = (text.length * ADVANCE * size) / 2;

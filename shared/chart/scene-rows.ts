@@ -5,7 +5,7 @@
  * margin to line up in.
  */
 import type { Model, Point, RowInfo } from '../model.js';
-import { arrowhead, pointPath, round2, toPage, unitVector, type PageTransform } from './geometry.js';
+import { arrowhead, pointPath, round2, roundPoints, toPage, unitVector, type PageTransform } from './geometry.js';
 import { ADVANCE, CAP_HEIGHT } from './scene-beads.js';
 import type { PathPrim, Primitive } from './scene-types.js';
 import type { Theme } from './themes.js';
@@ -62,13 +62,11 @@ export function rowNumbers(model: Model, t: PageTransform, theme: Theme, chartLe
       data: { row: row.row },
     });
     out.push({
-      kind: 'path',
+      kind: 'polygon',
       id: `ff-row-${row.row}-arrow`,
       role: 'row-arrow',
-      d: arrowhead(arrowTip, arrowDir, arrowSize),
+      points: roundPoints(arrowhead(arrowTip, arrowDir, arrowSize)),
       fill: theme.ink,
-      stroke: null,
-      strokeWidth: 0,
       data: { row: row.row },
     });
   }
@@ -87,7 +85,7 @@ export function seam(model: Model, t: PageTransform, theme: Theme): PathPrim[] {
       kind: 'path',
       id: 'ff-seam',
       role: 'seam',
-      d: pointPath([top, bottom], false),
+      d: pointPath([top.x, top.y, bottom.x, bottom.y], false),
       fill: null,
       stroke: theme.seam,
       strokeWidth: round2(Math.max(0.3, 0.05 * t.scale)),

@@ -71,7 +71,7 @@ export function threadOverlay(model: Model, row: number, t: PageTransform, theme
       kind: 'path',
       id: `ff-thread-${i + 1}`,
       role: 'thread',
-      d: pointPath([from, to], false),
+      d: pointPath([from.x, from.y, to.x, to.y], false),
       fill: null,
       stroke: theme.thread[pass.kind],
       strokeWidth: width,

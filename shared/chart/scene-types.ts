@@ -102,7 +102,18 @@ export interface PathPrim {
   data: DataAttrs;
 }
 
-export type Primitive = BeadPrim | TextPrim | RectPrim | PathPrim;
+/** A filled shape with straight sides (cells, cues, arrowheads), lowered to `<polygon>`. */
+export interface PolygonPrim {
+  kind: 'polygon';
+  id: string;
+  role: Role;
+  /** Page corners as x0, y0, x1, y1, ..., rounded like every other number. */
+  points: number[];
+  fill: string;
+  data: DataAttrs;
+}
+
+export type Primitive = BeadPrim | TextPrim | RectPrim | PathPrim | PolygonPrim;
 
 /** A hatch for the print theme's legend: lines in `d` repeated every `size` mm. */
 export interface HatchPattern {

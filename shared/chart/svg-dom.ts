@@ -7,6 +7,7 @@
 import { SVG, type Dom, type Svg } from '@svgdotjs/svg.js';
 import {
   formatNumber,
+  formatNumberList,
   ROOT_NAMES,
   rootValues,
   sceneChildren,
@@ -32,7 +33,8 @@ export interface ChartHandle {
 
 function setAttrs(el: Svg | Dom, names: readonly string[], values: readonly AttrValue[]): void {
   values.forEach((v, i) => {
-    if (v !== undefined) el.attr(names[i]!, typeof v === 'number' ? formatNumber(v) : v);
+    if (v !== undefined)
+      el.attr(names[i]!, typeof v === 'number' ? formatNumber(v) : typeof v === 'string' ? v : formatNumberList(v));
   });
 }
 

@@ -145,7 +145,7 @@ describe('designer and tester in the browser', () => {
     for (let i = 0; i < 3; i++) await page.keyboard.press('ArrowRight');
     expect(await placeText(page)).toBe('Row 2, unit 1 of 3');
     expect(await page.getByTestId('step-text').textContent()).toMatch(/Pick up/);
-    expect(await page.locator('.ff-bead.ff-highlight').count()).toBe(3);
+    expect(await page.locator('[data-bead].ff-highlight').count()).toBe(3);
     await saved;
     await page.reload();
     await page.getByTestId('stepper-place').waitFor();
@@ -246,7 +246,7 @@ describe('designer and tester in the browser', () => {
     await page.reload();
     const note = page.getByTestId('feedback-note');
     await note.getByText('The second bead here reads as chalk on my screen.').waitFor();
-    expect(await page.locator('.ff-bead.ff-noted').count()).toBeGreaterThan(0);
+    expect(await page.locator('[data-bead].ff-noted').count()).toBeGreaterThan(0);
     await note.getByRole('button', { name: 'Resolve' }).click();
     await page.getByText('Open notes (0)').waitFor();
     await page.getByText('Resolved notes (1)').waitFor();

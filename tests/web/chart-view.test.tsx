@@ -30,7 +30,7 @@ describe('chart view', () => {
     const onPick = vi.fn();
     const current = model.rows[1]!.units[1]!;
     const { container } = render(<ChartView model={model} dark={false} current={current} onPick={onPick} />);
-    const outlined = [...container.querySelectorAll('.ff-bead.ff-highlight')].map((el) =>
+    const outlined = [...container.querySelectorAll('[data-bead].ff-highlight')].map((el) =>
       Number(el.getAttribute('data-bead')),
     );
     const picked = model.steps
@@ -85,7 +85,7 @@ describe('chart view', () => {
       expect(h / w).toBeCloseTo(0.5, 5);
       // Row 1 is at the bottom of the chart: the view is scrolled there, not left at the title.
       expect(y).toBeGreaterThan(0);
-      const unitBeads = [...container.querySelectorAll(`.ff-bead[data-unit="${current}"]`)];
+      const unitBeads = [...container.querySelectorAll(`[data-bead][data-unit="${current}"]`)];
       expect(unitBeads.length).toBeGreaterThan(0);
       await userEvent.click(screen.getByRole('button', { name: 'Zoom in' }));
       await userEvent.click(screen.getByRole('button', { name: 'Fit' }));
