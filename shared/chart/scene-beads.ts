@@ -94,15 +94,19 @@ function cue(model: Model, unit: Unit, step: UnitStep, t: PageTransform, theme: 
   if (!other) return null;
   const c = toPage(t, nearImage(model, corner, unit));
   const along = unitVector(c, toPage(t, nearImage(model, other, unit)));
-  const centre = toPage(t, unit);
   // Step off the bead toward the cell's middle, so the mark never covers a bead.
-  const toMid = { x: centre.x - c.x, y: centre.y - c.y };
-  const dot = toMid.x * along.x + toMid.y * along.y;
-  const inward = unitVector({ x: 0, y: 0 }, { x: toMid.x - dot * along.x, y: toMid.y - dot * along.y });
+  const midX = t.left + (unit.x - t.minX) * t.scale - c.x;
+  const midY = t.top + (t.maxY - unit.y) * t.scale - c.y;
+  const dot = midX * along.x + midY * along.y;
+  const inX = midX - dot * along.x;
+  const inY = midY - dot * along.y;
+  const inLength = Math.hypot(inX, inY);
+  const ix = inLength === 0 ? 1 : inX / inLength;
+  const iy = inLength === 0 ? 0 : inY / inLength;
   const size = 0.17 * t.scale;
   const tip = {
-    x: c.x + inward.x * 0.3 * t.scale + along.x * (0.2 * t.scale + size),
-    y: c.y + inward.y * 0.3 * t.scale + along.y * (0.2 * t.scale + size),
+    x: c.x + ix * 0.3 * t.scale + along.x * (0.2 * t.scale + size),
+    y: c.y + iy * 0.3 * t.scale + along.y * (0.2 * t.scale + size),
   };
   return {
     kind: 'polygon',
