@@ -46,7 +46,7 @@ async function timed(fn: () => Promise<unknown>): Promise<number> {
   return wall;
 }
 
-async function convertOnce(root: string, jobs: number, out = 'out', formats?: OutputFormat[]): Promise<void> {
+async function convertOnce(root: string, jobs: number, out: string, formats?: OutputFormat[]): Promise<void> {
   const summary = await convertPaths(['in'], { out, cwd: root, jobs, force: true, formats });
   if (summary.converted !== FILES)
     throw new Error(`converted ${summary.converted} of ${FILES}: ${summary.files.find((f) => f.message)?.message}`);
@@ -105,17 +105,21 @@ async function fileCreationMs(root: string, threads: number): Promise<number> {
 }
 
 /**
- * What the processor allows: the same arithmetic loop on one thread, then
- * split over two. On a virtual machine whose host is busy, two threads may
- * get much less than two cores' worth, which no program can make up for.
+ * What the processor allows: the same arithmetic on one thread, then split
+ * over two. The loop runs in calls of a million steps, so V8 optimises it
+ * as it does any hot function (one loop of top-level code ran at speeds
+ * three times apart from run to run, waiting for on-stack replacement). On
+ * a virtual machine whose host is busy, two threads may get much less than
+ * two cores' worth, which no program can make up for.
  */
 function arithmeticMs(threads: number): Promise<number> {
   const code = `
     const { from, to } = require('node:worker_threads').workerData;
+    function spin(a, b) { let x = 0; for (let i = a; i < b; i++) x = (x + i * 7) | 0; return x; }
     let x = 0;
-    for (let i = from; i < to; i++) x = (x + i * 7) | 0;
+    for (let s = from; s < to; s += 1e6) x ^= spin(s, Math.min(s + 1e6, to));
     if (x === 0.5) console.log(x);`;
-  return threadsMs(code, threads, 5e8);
+  return threadsMs(code, threads, 2e9);
 }
 
 const bench: Bench = {
@@ -129,11 +133,14 @@ const bench: Bench = {
       // Warm this thread's modules, which --jobs 1 uses; workers start cold either way.
       await convertPaths(['in/p0000.ffp'], { out: 'warm', cwd: root, jobs: 1, force: true });
 
-      const one = await timed(() => convertOnce(root, 1));
-      const two = await timed(() => convertOnce(root, 2));
+      // Each run writes a folder of its own, as a first conversion does: replacing another run's files would
+      // add thousands of deletions to one run and not the other (ext4 then searches past recently freed inodes).
+      const one = await timed(() => convertOnce(root, 1, 'out-1'));
+      const two = await timed(() => convertOnce(root, 2, 'out-2'));
       const [oneCpu, twoCpu] = cpuMs.slice(-2) as [number, number];
-      const all = availableParallelism() === 2 ? two : await timed(() => convertOnce(root, availableParallelism()));
-      const baseline = await readAndWrite(root, 'out');
+      const all =
+        availableParallelism() === 2 ? two : await timed(() => convertOnce(root, availableParallelism(), 'out-all'));
+      const baseline = await readAndWrite(root, 'out-2');
       const withPng = await timed(() => convertOnce(root, availableParallelism(), 'out-png', [...OUTPUT_FORMATS]));
       const withPngBaseline = await readAndWrite(root, 'out-png');
       const createOne = await fileCreationMs(root, 1);

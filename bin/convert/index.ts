@@ -7,12 +7,14 @@ import { existsSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { resolve } from 'node:path';
-import { setImmediate } from 'node:timers/promises';
+import { MessageChannel } from 'node:worker_threads';
 import { Piscina } from 'piscina';
 import { EXIT_FAILURE, EXIT_OK, EXIT_PATTERN_ERRORS } from '../command.js';
-import { convertOne, type ConvertTask, type FileResult } from './convert-one.js';
+import { claimQueue, drainQueue } from './claim-queue.js';
+import type { ConvertTask, FileResult } from './convert-one.js';
 import { DEFAULT_OUTPUT_FORMATS, OUTPUT_FORMATS, type OutputFormat } from './formats.js';
 import { findInputs } from './find-inputs.js';
+import type { WorkerJob } from './worker.js';
 
 export type { FileResult } from './convert-one.js';
 export type { OutputFormat } from './formats.js';
@@ -48,41 +50,48 @@ export interface ConvertSummary {
 const workerFile = fileURLToPath(new URL('./worker.js', import.meta.url));
 
 /**
- * `jobs` lanes pull files from one queue. This thread is one of them: its
- * modules are loaded already, so it converts from the first moment while
- * the worker threads (the other `jobs - 1` lanes) are still loading theirs.
- * Each worker is handed two files at a time, so it has the next one ready
- * while this thread is busy with its own file and not yet reading results.
+ * `jobs` lanes take files from one shared queue: this thread, whose modules
+ * are loaded already, so it converts from the first moment while the worker
+ * threads (the other `jobs - 1` lanes) are still loading theirs, and one
+ * piscina task per worker thread that drains the queue on its own.
  */
 async function runAll(tasks: ConvertTask[], jobs: number, onResult: (r: FileResult) => void): Promise<FileResult[]> {
   const results: FileResult[] = new Array<FileResult>(tasks.length);
-  let next = 0;
-  const lane = async (convert: (task: ConvertTask) => Promise<FileResult>): Promise<void> => {
-    while (next < tasks.length) {
-      const i = next++;
-      results[i] = await convert(tasks[i]!);
-      onResult(results[i]);
-      // A file converts without ever leaving the microtask queue (its reads and writes are synchronous), so
-      // this thread's lane would keep the event loop from hearing that a worker finished and wants more.
-      if (convert === convertOne) await setImmediate();
-    }
+  const take = (index: number, result: FileResult): void => {
+    results[index] = result;
+    onResult(result);
   };
+  const queue = claimQueue(tasks);
   const lanes = Math.max(1, Math.min(jobs, tasks.length));
   const threads = existsSync(workerFile) ? lanes - 1 : 0;
   if (threads === 0) {
-    await Promise.all(Array.from({ length: lanes }, () => lane(convertOne)));
+    await Promise.all(Array.from({ length: lanes }, () => drainQueue(queue, take)));
     return results;
   }
-  const pool = new Piscina<ConvertTask, FileResult>({
-    filename: workerFile,
-    minThreads: threads,
-    maxThreads: threads,
-    concurrentTasksPerWorker: 2,
-    idleTimeout: 1000,
-  });
+  const pool = new Piscina<WorkerJob, number>({ filename: workerFile, minThreads: threads, maxThreads: threads });
+  const inWorker = async (): Promise<void> => {
+    const { port1, port2 } = new MessageChannel();
+    let received = 0;
+    let sent = Infinity;
+    const allIn = new Promise<void>((resolveAll, fail) => {
+      port1.on('message', ([index, result]: [number, FileResult]) => {
+        take(index, result);
+        if (++received === sent) resolveAll();
+      });
+      // The answer and the results come on different channels, so the answer may come first.
+      pool.run({ ...queue, port: port2 }, { transferList: [port2] }).then((count) => {
+        sent = count;
+        if (received === sent) resolveAll();
+      }, fail);
+    });
+    try {
+      await allIn;
+    } finally {
+      port1.close();
+    }
+  };
   try {
-    const inWorker = (task: ConvertTask): Promise<FileResult> => pool.run(task);
-    await Promise.all([lane(convertOne), ...Array.from({ length: 2 * threads }, () => lane(inWorker))]);
+    await Promise.all([drainQueue(queue, take), ...Array.from({ length: threads }, inWorker)]);
   } finally {
     await pool.destroy();
   }

@@ -31,15 +31,24 @@ afterAll(async () => {
 });
 
 test(
-  'two jobs (this thread and a worker thread) give the same outputs as one thread',
+  'two jobs (this thread and a worker thread) give the same outputs as one thread, each file once',
   { timeout: 60_000 },
   async () => {
     expect(existsSync(built), 'dist/ is missing: run npm run build:cli first').toBe(true);
     const { convertPaths: pooled } = (await import(pathToFileURL(built).href)) as { convertPaths: typeof convertPaths };
-    const a = await pooled(['in'], { out: 'pool', cwd: root, jobs: 2, formats: OUTPUT_FORMATS });
+    const told: string[] = [];
+    const a = await pooled(['in'], {
+      out: 'pool',
+      cwd: root,
+      jobs: 2,
+      formats: OUTPUT_FORMATS,
+      onResult: (r) => told.push(r.rel),
+    });
     const b = await convertPaths(['in'], { out: 'single', cwd: root, jobs: 1, formats: OUTPUT_FORMATS });
     expect([a.converted, a.failed, a.exitCode]).toEqual([7, 1, 1]);
     expect(a.files.map((f) => f.status)).toEqual(b.files.map((f) => f.status));
+    // Both lanes take from one shared queue: each file is converted, and reported, exactly once.
+    expect(told.sort()).toEqual(a.files.map((f) => f.rel));
     const files = (await readdir(join(root, 'pool'), { recursive: true }))
       .filter((f) => /\.(svg|png|md|json)$/.test(f))
       .sort();
