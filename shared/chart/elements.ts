@@ -115,7 +115,21 @@ function group(sink: SvgSink, role: string, inherited: Inherited): void {
   ]);
 }
 
-const TEXT_NAMES = ['id', 'class', 'x', 'y', 'font-size', 'fill', 'text-anchor', 'font-weight', ...DATA_NAMES];
+const TEXT_NAMES = [
+  'id',
+  'class',
+  'x',
+  'y',
+  'font-size',
+  'fill',
+  'text-anchor',
+  'font-weight',
+  'stroke',
+  'stroke-width',
+  'stroke-linejoin',
+  'paint-order',
+  ...DATA_NAMES,
+];
 const textValues: AttrValue[] = [];
 
 function text(sink: SvgSink, p: TextPrim, inherited: Inherited): void {
@@ -129,7 +143,13 @@ function text(sink: SvgSink, p: TextPrim, inherited: Inherited): void {
   v[5] = own(p.color, inherited.fill);
   v[6] = own(p.anchor, inherited.anchor ?? 'start');
   v[7] = p.bold === (inherited.bold ?? false) ? undefined : p.bold ? 'bold' : 'normal';
-  sink.element('text', TEXT_NAMES, putData(v, 8, p.data), p.text);
+  const halo = p.halo;
+  v[8] = halo?.color;
+  v[9] = halo?.width;
+  v[10] = halo && 'round';
+  // The outline is painted first, so it widens the glyphs' edge without eating into them.
+  v[11] = halo && 'stroke';
+  sink.element('text', TEXT_NAMES, putData(v, 12, p.data), p.text);
 }
 
 const BEAD_NAMES = [

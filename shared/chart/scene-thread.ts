@@ -21,6 +21,8 @@ const dashFor = (kind: PassKind, scale: number): string | undefined =>
 
 /** Where along a bead its passes' numbers go: off the middle, where the bead's key letter is. */
 const NUMBER_SLOT = 0.2;
+/** The halo's stroke width for a number of font size 1: half of it shows outside the glyphs. */
+const HALO = 0.3;
 
 /** The bead's two ends on the page, the `from` end first. */
 function ends(model: Model, beadId: number, from: number, t: PageTransform): [Point, Point] | null {
@@ -96,6 +98,7 @@ export function threadOverlay(model: Model, row: number, t: PageTransform, theme
       color: theme.thread[pass.kind],
       anchor: 'middle',
       bold: true,
+      halo: { color: theme.halo, width: round2(size * HALO) },
       data,
     });
   });

@@ -71,6 +71,8 @@ export interface TextPrim {
   color: string;
   anchor: 'start' | 'middle' | 'end';
   bold: boolean;
+  /** An outline in the page's colour behind the glyphs, for text drawn over beads of any colour. */
+  halo?: { color: string; width: number };
   data: DataAttrs;
 }
 

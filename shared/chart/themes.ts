@@ -19,6 +19,8 @@ export interface Theme {
   seam: string;
   failed: string;
   thread: { pickup: string; close: string; position: string };
+  /** Outline behind the thread's pass numbers, so they read on a dark bead as on a light one. */
+  halo: string;
   /** Print only: legend swatches carry a hatch so colours differ in greyscale too. */
   patternedLegend: boolean;
 }
@@ -35,6 +37,7 @@ const light: Theme = {
   seam: '#7a3fb0',
   failed: '#c62828',
   thread: { pickup: '#d0191f', close: '#1f5fbf', position: '#2e7d32' },
+  halo: '#ffffff',
   patternedLegend: false,
 };
 
@@ -50,6 +53,7 @@ const dark: Theme = {
   seam: '#c59bf0',
   failed: '#ff6b6b',
   thread: { pickup: '#ff6b6b', close: '#6aa8ff', position: '#7ad67e' },
+  halo: '#17181c',
   patternedLegend: false,
 };
 
@@ -65,6 +69,7 @@ const print: Theme = {
   seam: '#000000',
   failed: '#000000',
   thread: { pickup: '#000000', close: '#000000', position: '#000000' },
+  halo: '#ffffff',
   patternedLegend: true,
 };
 

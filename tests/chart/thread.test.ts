@@ -1,12 +1,17 @@
 /**
  * The thread overlay's pass numbers on a real example: each stands off the
  * middle of its bead (where the key letter is) and no two numbers overlap,
- * even where the thread passes a bead again.
+ * even where the thread passes a bead again; and each has a halo in the
+ * page's colour, so it reads on a dark bead as on a light one.
  */
 import { expect, test } from 'vitest';
 import { readFileSync } from 'node:fs';
+import { XMLParser } from 'fast-xml-parser';
+import { contrastRatio } from '../../shared/chart/contrast.js';
 import { buildScene } from '../../shared/chart/scene.js';
 import type { BeadPrim, TextPrim } from '../../shared/chart/scene-types.js';
+import { sceneToSvg } from '../../shared/chart/svg-text.js';
+import { themes } from '../../shared/chart/themes.js';
 import { compile } from '../../shared/compile.js';
 
 test.each([
@@ -39,4 +44,27 @@ test.each([
       expect(apartX || apartY, `${n.id} on ${m.id}`).toBe(true);
     }
   }
+});
+
+test.each(Object.values(themes))('$name theme: each pass number has a halo that reads against it', (theme) => {
+  const model = compile(readFileSync('examples/tern-panel.ffp', 'utf8')).value.model;
+  const scene = buildScene(model, { thread: 2, theme: theme.name }).value;
+  const numbers = scene.items.filter((i): i is TextPrim => i.kind === 'text' && i.role === 'thread-number');
+  expect(numbers.length).toBeGreaterThan(4);
+  for (const n of numbers) {
+    // The numbers cross beads of every colour (this row runs over jet and bone alike), so the halo, not
+    // the bead, is what a number is read against: WCAG 2.x asks 4.5:1 of text (success criterion 1.4.3).
+    expect(n.halo?.color).toBe(theme.halo);
+    expect(contrastRatio(n.color, n.halo!.color), n.id).toBeGreaterThanOrEqual(4.5);
+    expect(n.halo!.width).toBeGreaterThan(0);
+  }
+  // A painted page and the halo are one colour, so the halo never shows as a box on the page itself.
+  if (theme.background !== null) expect(theme.halo).toBe(theme.background);
+  // In the SVG (read with a reference XML parser), the outline is painted under the glyphs, not over them.
+  const svg = new XMLParser({ ignoreAttributes: false, attributeNamePrefix: '' }).parse(sceneToSvg(scene)) as {
+    svg: { text: Array<Record<string, string>> };
+  };
+  const drawn = svg.svg.text.filter((t) => t.class === 'ff-thread-number');
+  expect(drawn).toHaveLength(numbers.length);
+  for (const t of drawn) expect([t.stroke, t['paint-order']]).toEqual([theme.halo, 'stroke']);
 });
