@@ -24,6 +24,72 @@ const NUMBER_SLOT = 0.2;
 /** The halo's stroke width for a number of font size 1: half of it shows outside the glyphs. */
 const HALO = 0.3;
 
+interface Extent {
+  halfWidth: number;
+  halfHeight: number;
+}
+/** A pass number's glyph box on the page, by its centre. */
+export type NumberBox = Point & Extent;
+
+const overlaps = (a: NumberBox, b: NumberBox, gap: number): boolean =>
+  Math.abs(a.x - b.x) < a.halfWidth + b.halfWidth + gap && Math.abs(a.y - b.y) < a.halfHeight + b.halfHeight + gap;
+
+/**
+ * Where the number of a bead's `k`-th pass goes (its centre): its own place
+ * first (the k-th of near one end, near the other, then a box aside), and
+ * where that would cover a key letter or a number already placed, as on a
+ * round where beads meet at angles, the first clear one of the places one
+ * to three boxes further aside, then the same at the bead's other end,
+ * nearer its ends, and nearer its middle. If none is clear, its own place.
+ */
+function numberSpot(
+  p0: Point,
+  p1: Point,
+  side: Point,
+  k: number,
+  box: number,
+  extent: Extent,
+  placed: readonly NumberBox[],
+  gap: number,
+): Point {
+  const own = k % 2 === 0 ? NUMBER_SLOT : 1 - NUMBER_SLOT;
+  const aside = Math.floor(k / 2) * box;
+  let first: Point | undefined;
+  for (const slot of [own, 1 - own, own / 2, 1 - own / 2, 0.35, 0.65])
+    for (const shift of [0, box, -box, 2 * box, -2 * box, 3 * box, -3 * box]) {
+      const spot = {
+        x: p0.x + (p1.x - p0.x) * slot + side.x * (aside + shift),
+        y: p0.y + (p1.y - p0.y) * slot + side.y * (aside + shift),
+      };
+      first ??= spot;
+      if (placed.every((p) => !overlaps({ ...spot, ...extent }, p, gap))) return spot;
+    }
+  return first!;
+}
+
+/** Whether a box lies within `margin` of the page area of the passes' beads. */
+function nearBeads(
+  model: Model,
+  passes: readonly { bead: number }[],
+  t: PageTransform,
+  margin: number,
+): (box: NumberBox) => boolean {
+  let [left, top, right, bottom] = [Infinity, Infinity, -Infinity, -Infinity];
+  for (const { bead } of passes) {
+    const b = model.beads[bead];
+    if (!b) continue;
+    const c = toPage(t, b);
+    const reach = (b.length / 2) * t.scale + margin;
+    [left, top, right, bottom] = [
+      Math.min(left, c.x - reach),
+      Math.min(top, c.y - reach),
+      Math.max(right, c.x + reach),
+      Math.max(bottom, c.y + reach),
+    ];
+  }
+  return (box) => box.x >= left && box.x <= right && box.y >= top && box.y <= bottom;
+}
+
 /** The bead's two ends on the page, the `from` end first. */
 function ends(model: Model, beadId: number, from: number, t: PageTransform): [Point, Point] | null {
   const bead = model.beads[beadId];
@@ -37,7 +103,25 @@ function ends(model: Model, beadId: number, from: number, t: PageTransform): [Po
   return nearA ? [toPage(t, a), toPage(t, b)] : [toPage(t, b), toPage(t, a)];
 }
 
-export function threadOverlay(model: Model, row: number, t: PageTransform, theme: Theme): Result<Primitive[]> {
+/** The key letters' glyph boxes, which pass numbers keep clear of. */
+export function letterBoxes(items: readonly Primitive[]): NumberBox[] {
+  const boxes: NumberBox[] = [];
+  for (const p of items) {
+    if (p.kind !== 'bead' || !p.label) continue;
+    const { x, y, size, text } = p.label;
+    const halfHeight = (CAP_HEIGHT * size) / 2;
+    boxes.push({ x, y: y - halfHeight, halfWidth: (text.length * ADVANCE * size) / 2, halfHeight });
+  }
+  return boxes;
+}
+
+export function threadOverlay(
+  model: Model,
+  row: number,
+  t: PageTransform,
+  theme: Theme,
+  letters: readonly NumberBox[],
+): Result<Primitive[]> {
   const info = model.rows.find((r) => r.row === row);
   if (!info) {
     const diagnostic: Diagnostic = {
@@ -55,6 +139,9 @@ export function threadOverlay(model: Model, row: number, t: PageTransform, theme
   const size = round2(Math.max(1.2, 0.16 * t.scale));
   const digits = String(passes.length).length;
   const out: Primitive[] = [];
+  // Only letters near the row can be in a number's way.
+  const near = nearBeads(model, passes, t, 2 * size);
+  const placed: NumberBox[] = letters.filter(near);
   passes.forEach((pass, i) => {
     const e = ends(model, pass.bead, pass.from, t);
     if (!e) return;
@@ -83,16 +170,17 @@ export function threadOverlay(model: Model, row: number, t: PageTransform, theme
     // Measured from the same end of the bead whichever way the thread goes, so the passes of one bead
     // get different places: near one end, near the other, then the same a number's box aside, and so on.
     const [p0, p1] = Math.abs(b.x - a.x) > 1e-6 ? (a.x < b.x ? [a, b] : [b, a]) : a.y < b.y ? [a, b] : [b, a];
-    const slot = k % 2 === 0 ? NUMBER_SLOT : 1 - NUMBER_SLOT;
     const side = { x: -(p1.y - p0.y) / len, y: (p1.x - p0.x) / len };
     const box = Math.abs(side.x) * digits * ADVANCE * size + Math.abs(side.y) * CAP_HEIGHT * size + 0.3;
-    const aside = Math.floor(k / 2) * box;
+    const extent = { halfWidth: (String(i + 1).length * ADVANCE * size) / 2, halfHeight: (CAP_HEIGHT * size) / 2 };
+    const spot = numberSpot(p0, p1, side, k, box, extent, placed, HALO * size);
+    placed.push({ ...spot, ...extent });
     out.push({
       kind: 'text',
       id: `ff-thread-${i + 1}-n`,
       role: 'thread-number',
-      x: round2(p0.x + (p1.x - p0.x) * slot + side.x * aside),
-      y: round2(p0.y + (p1.y - p0.y) * slot + side.y * aside + (size * CAP_HEIGHT) / 2),
+      x: round2(spot.x),
+      y: round2(spot.y + extent.halfHeight),
       size,
       text: String(i + 1),
       color: theme.thread[pass.kind],

@@ -10,7 +10,7 @@ import { beadClearance } from './clearance.js';
 import { BEAD_THICKNESS, beads, cells, cues, failures, unitNumbers } from './scene-beads.js';
 import { legend, SCALE_BAR_HEIGHT, scaleBar, titleBlock } from './scene-margin.js';
 import { gutterWidth, rowNumbers, seam } from './scene-rows.js';
-import { threadOverlay } from './scene-thread.js';
+import { letterBoxes, threadOverlay } from './scene-thread.js';
 import type { Primitive, Scene, SceneOptions } from './scene-types.js';
 import { themes } from './themes.js';
 
@@ -92,7 +92,7 @@ export function buildScene(model: Model, options: SceneOptions = {}): Result<Sce
 
   const diagnostics = [];
   if (options.thread !== undefined) {
-    const overlay = threadOverlay(model, options.thread, t, theme);
+    const overlay = threadOverlay(model, options.thread, t, theme, letterBoxes(beadItems));
     add(overlay.value);
     diagnostics.push(...overlay.diagnostics);
   }

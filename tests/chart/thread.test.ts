@@ -5,7 +5,7 @@
  * page's colour, so it reads on a dark bead as on a light one.
  */
 import { expect, test } from 'vitest';
-import { readFileSync } from 'node:fs';
+import { readdirSync, readFileSync } from 'node:fs';
 import { XMLParser } from 'fast-xml-parser';
 import { contrastRatio } from '../../shared/chart/contrast.js';
 import { buildScene } from '../../shared/chart/scene.js';
@@ -14,13 +14,19 @@ import { sceneToSvg } from '../../shared/chart/svg-text.js';
 import { themes } from '../../shared/chart/themes.js';
 import { compile } from '../../shared/compile.js';
 
-test.each([
-  ['heron-band', 2],
-  ['kestrel-fan', 4],
-  ['reed-tube', 3],
-])('%s row %i: pass numbers clear of the key letters and of each other', (name, row) => {
-  const model = compile(readFileSync(`examples/${name}.ffp`, 'utf8')).value.model;
-  const scene = buildScene(model, { thread: row }).value;
+const modelOf = (name: string) => compile(readFileSync(`examples/${name}.ffp`, 'utf8')).value.model;
+
+/** Every row of every example: flat, tube and round, where beads meet at angles and numbers crowd. */
+const everyRow = readdirSync('examples')
+  .filter((f) => f.endsWith('.ffp'))
+  .sort()
+  .flatMap((f) => {
+    const name = f.slice(0, -'.ffp'.length);
+    return modelOf(name).rows.map((r): [string, number] => [name, r.row]);
+  });
+
+test.each(everyRow)('%s row %i: pass numbers clear of the key letters and of each other', (name, row) => {
+  const scene = buildScene(modelOf(name), { thread: row }).value;
   const numbers = scene.items.filter((i): i is TextPrim => i.kind === 'text' && i.role === 'thread-number');
   const letters = scene.items.flatMap((i) => (i.kind === 'bead' && i.label ? [(i as BeadPrim).label!] : []));
   expect(numbers.length).toBeGreaterThan(4);
@@ -47,8 +53,7 @@ test.each([
 });
 
 test.each(Object.values(themes))('$name theme: each pass number has a halo that reads against it', (theme) => {
-  const model = compile(readFileSync('examples/tern-panel.ffp', 'utf8')).value.model;
-  const scene = buildScene(model, { thread: 2, theme: theme.name }).value;
+  const scene = buildScene(modelOf('tern-panel'), { thread: 2, theme: theme.name }).value;
   const numbers = scene.items.filter((i): i is TextPrim => i.kind === 'text' && i.role === 'thread-number');
   expect(numbers.length).toBeGreaterThan(4);
   for (const n of numbers) {
