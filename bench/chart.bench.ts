@@ -85,6 +85,15 @@ const bench: Bench = {
       20,
     );
     if (size === 0) throw new Error('the chart came out empty');
+    // The outer round's thread, whose hundreds of pass numbers each keep clear of 5,000 key letters: what the
+    // viewer builds at every step of a tester's walk through that round.
+    const outer = model.rows.length;
+    const [withThread, without] = await medianPairMs(
+      () => buildScene(model, { thread: outer }),
+      () => buildScene(model),
+      11,
+      5,
+    );
     return [
       {
         name: `scene + SVG text of a ${model.beads.length}-bead round vs bare string concatenation of as many capsules`,
@@ -92,6 +101,12 @@ const bench: Bench = {
         baseline: bare,
         unit: 'ms',
         goal: { atMost: 3 },
+      },
+      {
+        name: `scene of the same round with the thread of round ${outer} vs without`,
+        value: withThread,
+        baseline: without,
+        unit: 'ms',
       },
     ];
   },

@@ -35,6 +35,45 @@ const overlaps = (a: NumberBox, b: NumberBox, gap: number): boolean =>
   Math.abs(a.x - b.x) < a.halfWidth + b.halfWidth + gap && Math.abs(a.y - b.y) < a.halfHeight + b.halfHeight + gap;
 
 /**
+ * The boxes a number must keep clear of, filed by square cells of the page
+ * so that a look-up reads only the boxes near it: a round of 5,000 beads
+ * has as many key letters, and a row's hundreds of numbers each try
+ * several places.
+ */
+const NO_BOXES: readonly NumberBox[] = [];
+
+class BoxGrid {
+  private readonly cells = new Map<number, NumberBox[]>();
+
+  constructor(
+    private readonly cell: number,
+    private readonly gap: number,
+  ) {}
+
+  /** Calls `f` with each cell that the box, widened by the gap, touches; stops when `f` says so. */
+  private each(b: NumberBox, f: (key: number) => boolean): boolean {
+    const c = this.cell;
+    const [x0, x1] = [Math.floor((b.x - b.halfWidth - this.gap) / c), Math.floor((b.x + b.halfWidth + this.gap) / c)];
+    const [y0, y1] = [Math.floor((b.y - b.halfHeight - this.gap) / c), Math.floor((b.y + b.halfHeight + this.gap) / c)];
+    for (let ix = x0; ix <= x1; ix++) for (let iy = y0; iy <= y1; iy++) if (!f(ix * 65536 + iy)) return false;
+    return true;
+  }
+
+  add(b: NumberBox): void {
+    this.each(b, (key) => {
+      const list = this.cells.get(key);
+      if (list) list.push(b);
+      else this.cells.set(key, [b]);
+      return true;
+    });
+  }
+
+  isClear(b: NumberBox): boolean {
+    return this.each(b, (key) => (this.cells.get(key) ?? NO_BOXES).every((o) => !overlaps(b, o, this.gap)));
+  }
+}
+
+/**
  * Where the number of a bead's `k`-th pass goes (its centre): its own place
  * first (the k-th of near one end, near the other, then a box aside), and
  * where that would cover a key letter or a number already placed, as on a
@@ -49,45 +88,22 @@ function numberSpot(
   k: number,
   box: number,
   extent: Extent,
-  placed: readonly NumberBox[],
-  gap: number,
-): Point {
+  placed: BoxGrid,
+): NumberBox {
   const own = k % 2 === 0 ? NUMBER_SLOT : 1 - NUMBER_SLOT;
   const aside = Math.floor(k / 2) * box;
-  let first: Point | undefined;
+  let first: NumberBox | undefined;
   for (const slot of [own, 1 - own, own / 2, 1 - own / 2, 0.35, 0.65])
     for (const shift of [0, box, -box, 2 * box, -2 * box, 3 * box, -3 * box]) {
       const spot = {
         x: p0.x + (p1.x - p0.x) * slot + side.x * (aside + shift),
         y: p0.y + (p1.y - p0.y) * slot + side.y * (aside + shift),
+        ...extent,
       };
       first ??= spot;
-      if (placed.every((p) => !overlaps({ ...spot, ...extent }, p, gap))) return spot;
+      if (placed.isClear(spot)) return spot;
     }
   return first!;
-}
-
-/** Whether a box lies within `margin` of the page area of the passes' beads. */
-function nearBeads(
-  model: Model,
-  passes: readonly { bead: number }[],
-  t: PageTransform,
-  margin: number,
-): (box: NumberBox) => boolean {
-  let [left, top, right, bottom] = [Infinity, Infinity, -Infinity, -Infinity];
-  for (const { bead } of passes) {
-    const b = model.beads[bead];
-    if (!b) continue;
-    const c = toPage(t, b);
-    const reach = (b.length / 2) * t.scale + margin;
-    [left, top, right, bottom] = [
-      Math.min(left, c.x - reach),
-      Math.min(top, c.y - reach),
-      Math.max(right, c.x + reach),
-      Math.max(bottom, c.y + reach),
-    ];
-  }
-  return (box) => box.x >= left && box.x <= right && box.y >= top && box.y <= bottom;
 }
 
 /** The bead's two ends on the page, the `from` end first. */
@@ -139,9 +155,8 @@ export function threadOverlay(
   const size = round2(Math.max(1.2, 0.16 * t.scale));
   const digits = String(passes.length).length;
   const out: Primitive[] = [];
-  // Only letters near the row can be in a number's way.
-  const near = nearBeads(model, passes, t, 2 * size);
-  const placed: NumberBox[] = letters.filter(near);
+  const placed = new BoxGrid(4 * size, HALO * size);
+  for (const l of letters) placed.add(l);
   passes.forEach((pass, i) => {
     const e = ends(model, pass.bead, pass.from, t);
     if (!e) return;
@@ -173,8 +188,8 @@ export function threadOverlay(
     const side = { x: -(p1.y - p0.y) / len, y: (p1.x - p0.x) / len };
     const box = Math.abs(side.x) * digits * ADVANCE * size + Math.abs(side.y) * CAP_HEIGHT * size + 0.3;
     const extent = { halfWidth: (String(i + 1).length * ADVANCE * size) / 2, halfHeight: (CAP_HEIGHT * size) / 2 };
-    const spot = numberSpot(p0, p1, side, k, box, extent, placed, HALO * size);
-    placed.push({ ...spot, ...extent });
+    const spot = numberSpot(p0, p1, side, k, box, extent, placed);
+    placed.add(spot);
     out.push({
       kind: 'text',
       id: `ff-thread-${i + 1}-n`,
