@@ -34,14 +34,15 @@ export type NumberBox = Point & Extent;
 const overlaps = (a: NumberBox, b: NumberBox, gap: number): boolean =>
   Math.abs(a.x - b.x) < a.halfWidth + b.halfWidth + gap && Math.abs(a.y - b.y) < a.halfHeight + b.halfHeight + gap;
 
+const NO_BOXES: readonly NumberBox[] = [];
+
 /**
  * The boxes a number must keep clear of, filed by square cells of the page
  * so that a look-up reads only the boxes near it: a round of 5,000 beads
  * has as many key letters, and a row's hundreds of numbers each try
- * several places.
+ * several places. Two cells may share a key far off the page; that only
+ * adds boxes to compare, never hides one.
  */
-const NO_BOXES: readonly NumberBox[] = [];
-
 class BoxGrid {
   private readonly cells = new Map<number, NumberBox[]>();
 
