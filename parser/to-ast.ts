@@ -203,7 +203,7 @@ class AstBuilder extends BaseVisitor {
           "open the group with '(' before its units, like '(AB CB)x2'",
         );
       } else {
-        const item = this.bodyToken(el);
+        const item = this.bodyToken(el, !row);
         if (item) items.push(item);
       }
     }
@@ -307,7 +307,7 @@ class AstBuilder extends BaseVisitor {
     return keys;
   }
 
-  private bodyToken(t: IToken): ItemNode | undefined {
+  private bodyToken(t: IToken, inGroup: boolean): ItemNode | undefined {
     if (!real(t)) return undefined;
     const range = this.range(t);
     switch (t.tokenType.name) {
@@ -324,11 +324,18 @@ class AstBuilder extends BaseVisitor {
         this.error(range, "a row has one ':', after its number", "start a new row on its own line: 'row 4: ...'");
         return undefined;
       default:
-        this.error(
-          range,
-          `'${t.image}' repeats a group, but no group comes before it`,
-          "put the units to repeat in '( )' right before the count: '(AB CB)x2'",
-        );
+        if (inGroup)
+          this.error(
+            range,
+            `'${t.image}' stands inside the group: a group's repeat count goes right after its ')'`,
+            "move the count out of the group, like '(AB CB)x2'",
+          );
+        else
+          this.error(
+            range,
+            `'${t.image}' repeats a group, but no group comes before it`,
+            "put the units to repeat in '( )' right before the count: '(AB CB)x2'",
+          );
         return undefined;
     }
   }
