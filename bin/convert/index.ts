@@ -75,8 +75,9 @@ async function runAll(tasks: ConvertTask[], jobs: number, onResult: (r: FileResu
   const queue = claimQueue(tasks);
   const lanes = Math.max(1, Math.min(jobs, tasks.length));
   const threads = existsSync(workerFile) ? Math.min(lanes - 1, Math.floor(tasks.length / FILES_PER_WORKER)) : 0;
+  // Lanes in one thread would only take turns, so without workers this thread is the one lane.
   if (threads === 0) {
-    await Promise.all(Array.from({ length: lanes }, () => drainQueue(queue, take)));
+    await drainQueue(queue, take);
     return results;
   }
   const pool = new Piscina<WorkerJob, number>({ filename: workerFile, minThreads: threads, maxThreads: threads });

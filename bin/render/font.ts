@@ -35,6 +35,7 @@ function sfnt(weight: Weight): Promise<Buffer> {
 }
 
 const subsetCache = new Map<string, Promise<EmbeddedFont[]>>();
+const SUBSET_CACHE_LIMIT = 256;
 let baselineWasmOnly = false;
 
 /**
@@ -52,7 +53,6 @@ function useBaselineWasmOnly(): void {
   setFlagsFromString('--liftoff-only');
   baselineWasmOnly = true;
 }
-const SUBSET_CACHE_LIMIT = 256;
 
 /**
  * Always in the subset: the digits and the marks of the chart's own lines
