@@ -2,15 +2,16 @@
  * The bundled JetBrains Mono (from @fontsource/jetbrains-mono, Latin set) for
  * charts: subsets for embedding in SVG, and whole font files for the PNG
  * rasteriser, which reads fonts from files only. Everything is cached per
- * process, since batch conversion renders thousands of charts.
+ * process, since batch conversion renders thousands of charts, and on disk
+ * in the temp folder, since every command and every worker thread of a batch
+ * would otherwise make the same few subsets again.
  */
 import { createHash } from 'node:crypto';
-import { mkdir, readFile, rename, stat, writeFile } from 'node:fs/promises';
+import { mkdir, readFile, rename, rm, stat, writeFile } from 'node:fs/promises';
 import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { setFlagsFromString } from 'node:v8';
-import subsetFont from 'subset-font';
 import type { EmbeddedFont } from '../../shared/chart/elements.js';
 import { woffToSfnt } from './woff.js';
 
@@ -32,6 +33,55 @@ function sfnt(weight: Weight): Promise<Buffer> {
     sfntCache.set(weight, cached);
   }
   return cached;
+}
+
+const cacheDir = join(tmpdir(), 'fourfold-fonts');
+const SUBSETTER_VERSION = String((require('subset-font/package.json') as { version?: unknown }).version);
+const hashOf = (...parts: Array<string | Buffer>): string => {
+  const hash = createHash('sha256');
+  for (const part of parts) hash.update(part).update('\0');
+  return hash.digest('hex').slice(0, 16);
+};
+
+/**
+ * `bytes` under `name` in the cache folder, written to a temporary name and
+ * renamed so that a reader, in this process or another, never sees half a
+ * file.
+ */
+async function storeInCache(name: string, bytes: Buffer): Promise<string> {
+  const file = join(cacheDir, name);
+  const temp = `${file}.${process.pid}.${Math.random().toString(36).slice(2)}.tmp`;
+  try {
+    await mkdir(cacheDir, { recursive: true });
+    await writeFile(temp, bytes);
+    await rename(temp, file);
+  } catch (error) {
+    await rm(temp, { force: true });
+    throw error;
+  }
+  return file;
+}
+
+/** An sfnt's first four bytes: 0x00010000 for TrueType outlines, which the subsetter writes. */
+const isTrueType = (bytes: Buffer): boolean => bytes.length > 12 && bytes.readUInt32BE(0) === 0x00010000;
+
+/**
+ * One weight subset to `text`, from the disk cache when an earlier run made
+ * it. Loading the subsetter and its WebAssembly and making a first subset
+ * took about 75 ms of every thread's first chart; reading the cached file
+ * takes well under one. The name holds everything the bytes depend on.
+ */
+async function subset(weight: Weight, text: string): Promise<Buffer> {
+  const face = await sfnt(weight);
+  const name = `subset-${weight}-${hashOf(face, SUBSETTER_VERSION, text)}.ttf`;
+  const cached = await readFile(join(cacheDir, name)).catch(() => null);
+  if (cached && isTrueType(cached)) return cached;
+  useBaselineWasmOnly();
+  const { default: subsetFont } = await import('subset-font');
+  const bytes = await subsetFont(face, text, { targetFormat: 'sfnt' });
+  // A cache that cannot be written only makes the next run slower.
+  await storeInCache(name, bytes).catch(() => {});
+  return bytes;
 }
 
 const subsetCache = new Map<string, Promise<EmbeddedFont[]>>();
@@ -69,12 +119,11 @@ export function embeddedFonts(glyphs: string): Promise<EmbeddedFont[]> {
   const text = [...new Set([...glyphs, ...ALWAYS])].sort().join('');
   let cached = subsetCache.get(text);
   if (!cached) {
-    useBaselineWasmOnly();
     cached = Promise.all(
       WEIGHTS.map(async (weight) => ({
         family: FONT_FAMILY,
         weight,
-        base64: (await subsetFont(await sfnt(weight), text, { targetFormat: 'sfnt' })).toString('base64'),
+        base64: (await subset(weight, text)).toString('base64'),
       })),
     );
     if (subsetCache.size >= SUBSET_CACHE_LIMIT) subsetCache.delete(subsetCache.keys().next().value as string);
@@ -86,28 +135,19 @@ export function embeddedFonts(glyphs: string): Promise<EmbeddedFont[]> {
 let filesCache: Promise<string[]> | undefined;
 
 /**
- * The two faces as .ttf files in the temp folder, named by their content hash
- * so processes and workers share them; written to a temporary name and renamed
- * so a reader never sees half a file.
+ * The two faces as .ttf files in the cache folder, named by their content
+ * hash so processes and workers share them.
  */
 export function fontFiles(): Promise<string[]> {
   filesCache ??= Promise.all(
     WEIGHTS.map(async (weight) => {
       const bytes = await sfnt(weight);
-      const hash = createHash('sha256').update(bytes).digest('hex').slice(0, 16);
-      const dir = join(tmpdir(), 'fourfold-fonts');
-      const file = join(dir, `jetbrains-mono-${weight}-${hash}.ttf`);
-      const present = await stat(file).then(
+      const name = `jetbrains-mono-${weight}-${hashOf(bytes)}.ttf`;
+      const present = await stat(join(cacheDir, name)).then(
         (s) => s.size === bytes.length,
         () => false,
       );
-      if (!present) {
-        await mkdir(dir, { recursive: true });
-        const temp = `${file}.${process.pid}.${Math.random().toString(36).slice(2)}.tmp`;
-        await writeFile(temp, bytes);
-        await rename(temp, file);
-      }
-      return file;
+      return present ? join(cacheDir, name) : storeInCache(name, bytes);
     }),
   );
   return filesCache;
