@@ -77,9 +77,10 @@ function startPool(threads: number, lanes: number): Piscina<WorkerJob, number> {
   if (compileOnLanes) setFlagsFromString('--no-concurrent-recompilation');
   const pool = new Piscina<WorkerJob, number>({ filename: workerFile, minThreads: threads, maxThreads: threads });
   if (compileOnLanes)
-    void Promise.allSettled(pool.threads.map((worker) => once(worker, 'online'))).then(() =>
-      setFlagsFromString('--concurrent-recompilation'),
-    );
+    // A worker that fails or exits before it runs (at the latest when the pool is destroyed) settles too.
+    void Promise.allSettled(
+      pool.threads.map((worker) => Promise.race([once(worker, 'online'), once(worker, 'exit')])),
+    ).then(() => setFlagsFromString('--concurrent-recompilation'));
   return pool;
 }
 
