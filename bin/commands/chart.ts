@@ -12,6 +12,7 @@ import { EXIT_FAILURE, EXIT_OK, EXIT_PATTERN_ERRORS, type CliIO, type ParsedComm
 import { writeFileAtomic } from '../convert/atomic-write.js';
 import { compilePattern, ioReason } from '../read-input.js';
 import { renderChartFiles } from '../render/chart-files.js';
+import { FontCacheError } from '../render/font.js';
 import { resolve } from 'node:path';
 
 /** The scene options as args.ts hands them over. */
@@ -49,7 +50,14 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
       return EXIT_FAILURE;
     }
     const dpi = typeof cmd.options.dpi === 'number' ? cmd.options.dpi : undefined;
-    const files = await renderChartFiles(model, { ...options, png, ...(dpi === undefined ? {} : { dpi }) });
+    let files: Awaited<ReturnType<typeof renderChartFiles>>;
+    try {
+      files = await renderChartFiles(model, { ...options, png, ...(dpi === undefined ? {} : { dpi }) });
+    } catch (error) {
+      if (!(error instanceof FontCacheError)) throw error;
+      io.stderr.write(`fourfold: ${error.message}: ${ioReason(error.cause)}\n`);
+      return EXIT_FAILURE;
+    }
     if (hasErrors(files.diagnostics)) return optionErrors(files.diagnostics, io);
     bytes = files.png ?? files.svg;
   }

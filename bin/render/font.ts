@@ -56,10 +56,18 @@ async function storeInCache(name: string, bytes: Buffer): Promise<string> {
     await writeFile(temp, bytes);
     await rename(temp, file);
   } catch (error) {
-    await rm(temp, { force: true });
+    // The original error says what went wrong; a failed clean-up of the temporary name would only hide it.
+    await rm(temp, { force: true }).catch(() => {});
     throw error;
   }
   return file;
+}
+
+/** The PNG rasteriser's font files could not be written: the machine's problem, not the pattern's or a bug. */
+export class FontCacheError extends Error {
+  constructor(cause: unknown) {
+    super(`cannot write the bundled font for PNG output into '${cacheDir}'`, { cause });
+  }
 }
 
 /** An sfnt's first four bytes: 0x00010000 for TrueType outlines, which the subsetter writes. */
@@ -147,8 +155,13 @@ export function fontFiles(): Promise<string[]> {
         (s) => s.size === bytes.length,
         () => false,
       );
-      return present ? join(cacheDir, name) : storeInCache(name, bytes);
+      if (present) return join(cacheDir, name);
+      return storeInCache(name, bytes).catch((error: unknown) => {
+        throw new FontCacheError(error);
+      });
     }),
   );
+  // A later call tries again: the folder may be writable by then.
+  filesCache.catch(() => (filesCache = undefined));
   return filesCache;
 }

@@ -81,4 +81,17 @@ describe('the built fourfold command', () => {
     expect(r.stderr).toBe('');
     expect(r.exitCode).toBe(0);
   });
+
+  it('a font cache that cannot be written: SVG still works, PNG says why and exits 2, no "bug" line', async () => {
+    // A temp folder under a file cannot hold a folder, on every system.
+    const env = { TMPDIR: `${fixtures}strip.ffp/tmp` };
+    const svg = await execa('node', [launcher, 'chart', 'strip.ffp'], { cwd: fixtures, env, reject: false });
+    expect(svg.exitCode).toBe(0);
+    expect(svg.stdout).toContain('<svg');
+    const png = await execa('node', [launcher, 'chart', 'strip.ffp', '--png'], { cwd: fixtures, env, reject: false });
+    expect(png.exitCode).toBe(2);
+    expect(png.stderr).toBe(
+      `fourfold: cannot write the bundled font for PNG output into '${fixtures}strip.ffp/tmp/fourfold-fonts': a part of the path is not a folder`,
+    );
+  });
 });

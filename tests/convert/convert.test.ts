@@ -1,4 +1,4 @@
-import { afterEach, beforeEach, describe, expect, test } from 'vitest';
+import { afterEach, beforeEach, describe, expect, test, vi } from 'vitest';
 import { mkdir, mkdtemp, readdir, readFile, rm, stat, symlink, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -115,6 +115,30 @@ describe('convert a folder', () => {
         message: expect.stringContaining("cannot write outputs of 'fan.ffp'"),
       }),
     ]);
+  });
+
+  test('a font cache that cannot be written makes PNG files unwritable: exit 2, and nothing of theirs written', async () => {
+    const saved = process.env.TMPDIR;
+    // The cache folder is fixed when the font module loads, so load a fresh copy with a temp folder that cannot hold one.
+    process.env.TMPDIR = join(inDir(), 'fan.ffp', 'tmp');
+    try {
+      vi.resetModules();
+      const fresh = (await import('../../bin/convert/index.js')).convertPaths;
+      const summary = await fresh(['patterns/fan.ffp'], { out: 'out', cwd: root, jobs: 1, formats: ['svg', 'png'] });
+      expect(summary.exitCode).toBe(2);
+      expect(summary.files).toEqual([
+        {
+          rel: 'fan.ffp',
+          status: 'io-error',
+          message: `fan.ffp: cannot write the bundled font for PNG output into '${join(process.env.TMPDIR, 'fourfold-fonts')}': a part of the path is not a folder`,
+        },
+      ]);
+      expect(await listFiles(outDir()).catch(() => [])).toEqual([]);
+    } finally {
+      if (saved === undefined) delete process.env.TMPDIR;
+      else process.env.TMPDIR = saved;
+      vi.resetModules();
+    }
   });
 
   test('a glob mirrors the tree below its fixed part', async () => {
