@@ -52,7 +52,10 @@ async function storeInCache(name: string, bytes: Buffer): Promise<string> {
   const file = join(cacheDir, name);
   const temp = `${file}.${process.pid}.${Math.random().toString(36).slice(2)}.tmp`;
   try {
-    await mkdir(cacheDir, { recursive: true });
+    // Not recursive: the temp folder itself must exist, and Node's recursive mkdir never returns for a path under /proc.
+    await mkdir(cacheDir).catch((error: NodeJS.ErrnoException) => {
+      if (error.code !== 'EEXIST') throw error;
+    });
     await writeFile(temp, bytes);
     await rename(temp, file);
   } catch (error) {
