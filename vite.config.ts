@@ -2,6 +2,8 @@
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 
 // One file for the web build and for every test project, so there is one
 // place that says which tests run where.
@@ -18,6 +20,8 @@ export default defineConfig({
   },
   test: {
     root: '.',
+    // Charts drawn by the tests cache their font subsets here rather than in the user's own cache folder.
+    env: { FOURFOLD_CACHE_DIR: join(tmpdir(), 'fourfold-test-cache') },
     projects: [
       {
         extends: true,

@@ -3,15 +3,17 @@
  * charts: subsets for embedding in SVG, and whole font files for the PNG
  * rasteriser, which reads fonts from files only. Everything is cached per
  * process, since batch conversion renders thousands of charts, and on disk
- * in the temp folder, since every command and every worker thread of a batch
- * would otherwise make the same few subsets again.
+ * in the user's cache folder, since every command and every worker thread of
+ * a batch would otherwise make the same few subsets again. The user's own
+ * folder, not the shared temp folder, so that nobody else can put a file of
+ * their choosing where a chart takes its font from.
  */
 import { createHash } from 'node:crypto';
 import { mkdir, readFile, rename, rm, stat, writeFile } from 'node:fs/promises';
 import { createRequire } from 'node:module';
-import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
 import { setFlagsFromString } from 'node:v8';
+import envPaths from 'env-paths';
 import type { EmbeddedFont } from '../../shared/chart/elements.js';
 import { woffToSfnt } from './woff.js';
 
@@ -35,7 +37,8 @@ function sfnt(weight: Weight): Promise<Buffer> {
   return cached;
 }
 
-const cacheDir = join(tmpdir(), 'fourfold-fonts');
+/** FOURFOLD_CACHE_DIR when set (tests, read-only homes), else the platform's cache folder (`~/.cache/fourfold` on Linux). */
+const cacheDir = join(process.env.FOURFOLD_CACHE_DIR || envPaths('fourfold', { suffix: '' }).cache, 'fonts');
 const SUBSETTER_VERSION = String((require('subset-font/package.json') as { version?: unknown }).version);
 const hashOf = (...parts: Array<string | Buffer>): string => {
   const hash = createHash('sha256');
@@ -52,10 +55,7 @@ async function storeInCache(name: string, bytes: Buffer): Promise<string> {
   const file = join(cacheDir, name);
   const temp = `${file}.${process.pid}.${Math.random().toString(36).slice(2)}.tmp`;
   try {
-    // Not recursive: the temp folder itself must exist, and Node's recursive mkdir never returns for a path under /proc.
-    await mkdir(cacheDir).catch((error: NodeJS.ErrnoException) => {
-      if (error.code !== 'EEXIST') throw error;
-    });
+    await mkdir(cacheDir, { recursive: true, mode: 0o700 });
     await writeFile(temp, bytes);
     await rename(temp, file);
   } catch (error) {

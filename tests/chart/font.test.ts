@@ -1,5 +1,5 @@
 import { describe, expect, test, vi } from 'vitest';
-import { readdir, readFile, writeFile } from 'node:fs/promises';
+import { mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises';
 import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
@@ -75,33 +75,37 @@ describe('the bundled font', () => {
   });
 
   test('a subset made once is read from the disk cache by a fresh process, and a damaged entry is made again', async () => {
-    // A fresh copy of the module stands for a new process: its in-memory cache is empty.
+    const saved = process.env.FOURFOLD_CACHE_DIR;
+    process.env.FOURFOLD_CACHE_DIR = await mkdtemp(join(tmpdir(), 'fourfold-font-cache-'));
+    // A fresh copy of the module stands for a new process: its in-memory cache is empty, and it reads the folder anew.
     const freshFonts = async () => {
       vi.resetModules();
       return (await import('../../bin/render/font.js')).embeddedFonts;
     };
-    const cacheDir = join(tmpdir(), 'fourfold-fonts');
-    const entries = async () =>
-      new Set((await readdir(cacheDir).catch(() => [])).filter((f) => f.startsWith('subset-')));
-    // Characters no other test uses, so the entries this makes are new on every run.
-    const text = `Qq ${Date.now().toString(36)}${process.pid}`;
-    const before = await entries();
-    const [made, madeBold] = await (await freshFonts())(text);
-    const added = [...(await entries())].filter((f) => !before.has(f));
-    expect(added).toHaveLength(2); // one per weight
-    const regularEntry = join(
-      cacheDir,
-      added.find((f) => f.startsWith('subset-400-'))!,
-    );
-    expect((await readFile(regularEntry)).toString('base64')).toBe(made!.base64);
+    const cacheDir = join(process.env.FOURFOLD_CACHE_DIR, 'fonts');
+    try {
+      const [made, madeBold] = await (await freshFonts())('ABC 123');
+      const entries = (await readdir(cacheDir)).sort();
+      expect(entries).toEqual([
+        expect.stringMatching(/^subset-400-\w+\.ttf$/),
+        expect.stringMatching(/^subset-700-\w+\.ttf$/),
+      ]);
+      const regularEntry = join(cacheDir, entries[0]!);
+      expect((await readFile(regularEntry)).toString('base64')).toBe(made!.base64);
 
-    // Another valid face put in the entry comes back as it is: the file is read, not made again.
-    await writeFile(regularEntry, Buffer.from(madeBold!.base64, 'base64'));
-    expect((await (await freshFonts())(text))[0]!.base64).toBe(madeBold!.base64);
+      // Another valid face put in the entry comes back as it is: the file is read, not made again.
+      await writeFile(regularEntry, Buffer.from(madeBold!.base64, 'base64'));
+      expect((await (await freshFonts())('ABC 123'))[0]!.base64).toBe(madeBold!.base64);
 
-    await writeFile(regularEntry, 'not a font');
-    const [remade] = await (await freshFonts())(text);
-    expect(remade!.base64).toBe(made!.base64);
-    expect((await readFile(regularEntry)).toString('base64')).toBe(made!.base64);
+      await writeFile(regularEntry, 'not a font');
+      const [remade] = await (await freshFonts())('ABC 123');
+      expect(remade!.base64).toBe(made!.base64);
+      expect((await readFile(regularEntry)).toString('base64')).toBe(made!.base64);
+    } finally {
+      await rm(process.env.FOURFOLD_CACHE_DIR, { recursive: true, force: true });
+      if (saved === undefined) delete process.env.FOURFOLD_CACHE_DIR;
+      else process.env.FOURFOLD_CACHE_DIR = saved;
+      vi.resetModules();
+    }
   });
 });

@@ -83,15 +83,15 @@ describe('the built fourfold command', () => {
   });
 
   it('a font cache that cannot be written: SVG still works, PNG says why and exits 2, no "bug" line', async () => {
-    // A temp folder under a file cannot hold a folder, on every system.
-    const env = { TMPDIR: `${fixtures}strip.ffp/tmp` };
+    // A cache folder under a file cannot be made, on every system.
+    const env = { FOURFOLD_CACHE_DIR: `${fixtures}strip.ffp/cache` };
     const svg = await execa('node', [launcher, 'chart', 'strip.ffp'], { cwd: fixtures, env, reject: false });
     expect(svg.exitCode).toBe(0);
     expect(svg.stdout).toContain('<svg');
     const png = await execa('node', [launcher, 'chart', 'strip.ffp', '--png'], { cwd: fixtures, env, reject: false });
     expect(png.exitCode).toBe(2);
     expect(png.stderr).toBe(
-      `fourfold: cannot write the bundled font for PNG output into '${fixtures}strip.ffp/tmp/fourfold-fonts': a part of the path is not a folder`,
+      `fourfold: cannot write the bundled font for PNG output into '${fixtures}strip.ffp/cache/fonts': a part of the path is not a folder`,
     );
   });
 });

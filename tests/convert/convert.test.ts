@@ -118,9 +118,9 @@ describe('convert a folder', () => {
   });
 
   test('a font cache that cannot be written makes PNG files unwritable: exit 2, and nothing of theirs written', async () => {
-    const saved = process.env.TMPDIR;
-    // The cache folder is fixed when the font module loads, so load a fresh copy with a temp folder that cannot hold one.
-    process.env.TMPDIR = join(inDir(), 'fan.ffp', 'tmp');
+    const saved = process.env.FOURFOLD_CACHE_DIR;
+    // The cache folder is fixed when the font module loads, so load a fresh copy with one that cannot be made.
+    process.env.FOURFOLD_CACHE_DIR = join(inDir(), 'fan.ffp', 'cache');
     try {
       vi.resetModules();
       const fresh = (await import('../../bin/convert/index.js')).convertPaths;
@@ -130,13 +130,13 @@ describe('convert a folder', () => {
         {
           rel: 'fan.ffp',
           status: 'io-error',
-          message: `fan.ffp: cannot write the bundled font for PNG output into '${join(process.env.TMPDIR, 'fourfold-fonts')}': a part of the path is not a folder`,
+          message: `fan.ffp: cannot write the bundled font for PNG output into '${join(process.env.FOURFOLD_CACHE_DIR, 'fonts')}': a part of the path is not a folder`,
         },
       ]);
       expect(await listFiles(outDir()).catch(() => [])).toEqual([]);
     } finally {
-      if (saved === undefined) delete process.env.TMPDIR;
-      else process.env.TMPDIR = saved;
+      if (saved === undefined) delete process.env.FOURFOLD_CACHE_DIR;
+      else process.env.FOURFOLD_CACHE_DIR = saved;
       vi.resetModules();
     }
   });
