@@ -69,7 +69,8 @@ const workerFile = fileURLToPath(new URL('./worker.js', import.meta.url));
  * small patterns on two cores, the calling thread warm: 1.3 to 1.55 s before,
  * 1.0 to 1.1 s after). V8 reads the flag when a thread's engine starts, and
  * the flag holds for the whole process, so it is set back as soon as the
- * workers are running, before anything else can start a thread.
+ * workers are running; a thread started meanwhile elsewhere in the process
+ * would compile on its own thread too, which is only slower for it.
  */
 function startPool(threads: number, lanes: number): Piscina<WorkerJob, number> {
   const ownFlag = process.execArgv.some((a) => a.includes('concurrent-recompilation'));
