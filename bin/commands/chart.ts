@@ -55,7 +55,7 @@ export async function run(cmd: ParsedCommand, io: CliIO): Promise<number> {
       files = await renderChartFiles(model, { ...options, png, ...(dpi === undefined ? {} : { dpi }) });
     } catch (error) {
       if (!(error instanceof FontCacheError)) throw error;
-      io.stderr.write(`fourfold: ${error.message}: ${ioReason(error.cause)}\n`);
+      io.stderr.write(`fourfold: ${error.message}\n`);
       return EXIT_FAILURE;
     }
     if (hasErrors(files.diagnostics)) return optionErrors(files.diagnostics, io);

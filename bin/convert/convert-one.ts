@@ -13,7 +13,7 @@ import { hasErrors } from '../../shared/diagnostic.js';
 import type { Model } from '../../shared/model.js';
 import { buildSteps } from '../../shared/steps.js';
 import { renderStepsMarkdown } from '../../shared/steps-render.js';
-import { cannotRead, decodePattern, ioReason } from '../read-input.js';
+import { cannotRead, decodePattern } from '../read-input.js';
 import { renderChartFiles } from '../render/chart-files.js';
 import { FontCacheError } from '../render/font.js';
 import { DEFAULT_DPI } from '../render/png.js';
@@ -125,7 +125,7 @@ export async function convertOne(task: ConvertTask): Promise<FileResult> {
     outputs = await outputsOf(compiled.value.model, formats);
   } catch (error) {
     if (error instanceof FontCacheError)
-      return { rel: task.rel, status: 'io-error', message: `${task.rel}: ${error.message}: ${ioReason(error.cause)}` };
+      return { rel: task.rel, status: 'io-error', message: `${task.rel}: ${error.message}` };
     // A bug in the engine or a renderer, not the user's: say so, and go on with the other files.
     return {
       rel: task.rel,

@@ -15,6 +15,7 @@ import { dirname, join } from 'node:path';
 import { setFlagsFromString } from 'node:v8';
 import envPaths from 'env-paths';
 import type { EmbeddedFont } from '../../shared/chart/elements.js';
+import { ioReason } from '../read-input.js';
 import { woffToSfnt } from './woff.js';
 
 export const FONT_FAMILY = 'JetBrains Mono';
@@ -69,7 +70,7 @@ async function storeInCache(name: string, bytes: Buffer): Promise<string> {
 /** The PNG rasteriser's font files could not be written: the machine's problem, not the pattern's or a bug. */
 export class FontCacheError extends Error {
   constructor(cause: unknown) {
-    super(`cannot write the bundled font for PNG output into '${cacheDir}'`, { cause });
+    super(`cannot write the bundled font for PNG output into '${cacheDir}': ${ioReason(cause)}`, { cause });
   }
 }
 
