@@ -8,8 +8,10 @@ export class HttpError extends Error {
     readonly code: string,
     message: string,
     readonly details?: unknown,
+    /** What the server's log gets for a 5xx; the client sees only the message. */
+    cause?: unknown,
   ) {
-    super(message);
+    super(message, { cause });
   }
 }
 
@@ -34,8 +36,10 @@ export const errorHandler =
   (log: (error: unknown) => void): ErrorRequestHandler =>
   (error: unknown, _req, res, _next) => {
     let http: HttpError;
-    if (error instanceof HttpError) http = error;
-    else if (error instanceof multer.MulterError) http = fromMulter(error);
+    if (error instanceof HttpError) {
+      http = error;
+      if (http.status >= 500 && http.cause !== undefined) log(http.cause);
+    } else if (error instanceof multer.MulterError) http = fromMulter(error);
     else if ((error as { type?: string }).type === 'entity.too.large')
       http = new HttpError(413, 'too-large', 'The request body is too large.');
     else if ((error as { type?: string }).type === 'entity.parse.failed')

@@ -8,6 +8,7 @@ import { renderChartSvg } from '../bin/render/chart-files.js';
 import { sceneOptions } from '../bin/commands/chart.js';
 // The CLI's --dpi default is this same constant.
 import { DEFAULT_DPI, svgToPng } from '../bin/render/png.js';
+import { FontCacheError } from '../bin/render/font.js';
 import { hasErrors } from '../shared/diagnostic.js';
 import { renderKitHtml, renderKitMarkdown } from '../shared/kit.js';
 import type { Model } from '../shared/model.js';
@@ -81,6 +82,21 @@ export function cachedRenderer(max = 64): Render {
   };
 }
 
+/**
+ * The rasteriser's font files go to the server's cache folder; when it cannot
+ * be written, PNG is out of order until an operator fixes it, while SVG and
+ * everything else still work. The folder's path goes to the log only.
+ */
+async function pngOf(svg: string, dpi: number): Promise<Buffer> {
+  try {
+    return await svgToPng(svg, dpi);
+  } catch (error) {
+    if (!(error instanceof FontCacheError)) throw error;
+    const message = 'PNG charts cannot be made on this server just now; the SVG chart and the other views still work.';
+    throw new HttpError(503, 'png-unavailable', message, undefined, error);
+  }
+}
+
 export async function renderView(
   kind: ViewKind,
   model: Model | null,
@@ -99,7 +115,7 @@ export async function renderView(
       if (hasErrors(diagnostics)) throw new HttpError(400, 'invalid-input', diagnostics[0]!.message, diagnostics);
       return kind === 'chart.svg'
         ? { type: 'image/svg+xml; charset=utf-8', body: svg }
-        : { type: 'image/png', body: await svgToPng(svg, dpi ?? DEFAULT_DPI) };
+        : { type: 'image/png', body: await pngOf(svg, dpi ?? DEFAULT_DPI) };
     }
     case 'tally': {
       needsClean(model);

@@ -39,13 +39,21 @@ export async function freshDatabaseUrl(): Promise<string> {
   return base.toString();
 }
 
-export async function startHarness(options: { examplesDir?: string; loginLimit?: number } = {}): Promise<Harness> {
+export async function startHarness(
+  options: { examplesDir?: string; loginLimit?: number; log?: (error: unknown) => void } = {},
+): Promise<Harness> {
   const url = await freshDatabaseUrl();
   const db = connect(url);
   await migrate(db.sequelize);
   await seedDemo(db, { password: PASSWORD, examplesDir: options.examplesDir });
   const mailer = await createMailer({ from: 'Fourfold <no-reply@fourfold.invalid>' });
-  const app = createApp({ db, mailer, publicUrl: PUBLIC_URL, loginLimit: options.loginLimit ?? 1000, log: () => {} });
+  const app = createApp({
+    db,
+    mailer,
+    publicUrl: PUBLIC_URL,
+    loginLimit: options.loginLimit ?? 1000,
+    log: options.log ?? (() => {}),
+  });
   return {
     db,
     mailer,
