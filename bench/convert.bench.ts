@@ -3,26 +3,32 @@
  * (svg,md,json): `--jobs 2` against `--jobs 1` (goal: at least 1.7x faster
  * on 2 cores), and the default (all cores) against a baseline that only
  * reads each pattern and writes files of the sizes its outputs have (goal:
- * at most 5x). Worker threads start cold in every run, as they do for a
- * user. A last figure, without a goal, does the same with PNG added, to show
- * what rasterising costs.
+ * at most 5x). Each run is a fresh `fourfold convert` process, as a user
+ * starts it, so no run inherits code that another run made V8 compile.
+ * Further figures, without goals: a batch with more work per worker, what
+ * the file system and the processor allow, and what PNG costs.
  */
+import { spawnSync } from 'node:child_process';
 import { mkdir, mkdtemp, readFile, readdir, rm, stat, writeFile } from 'node:fs/promises';
 import { availableParallelism, tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
+import { fileURLToPath } from 'node:url';
 import { Worker } from 'node:worker_threads';
-import { convertPaths, type OutputFormat } from '../bin/convert/index.js';
-import { DEFAULT_OUTPUT_FORMATS, OUTPUT_FORMATS } from '../bin/convert/formats.js';
+import { DEFAULT_OUTPUT_FORMATS, OUTPUT_FORMATS, type OutputFormat } from '../bin/convert/formats.js';
+import { plannedWorkers } from '../bin/convert/index.js';
 import type { Bench } from './harness.js';
 
 const FILES = 1000;
 const HEX = ['#2e6f8e', '#f4f1ea', '#c98b2b', '#6b2d5c', '#8fa683', '#1b1b1f'];
 
-/** A flat panel of 3-6 units by 3-8 rows in two or three colours, different for each i. */
-export function smallPattern(i: number): string {
-  const units = 3 + (i % 4);
-  const rows = 3 + (i % 6);
+/**
+ * A flat panel of 3-6 units by 3-8 rows in two or three colours, different
+ * for each i; `scale` multiplies both, so scale 3 has about nine times the beads.
+ */
+export function samplePattern(i: number, scale = 1): string {
+  const units = (3 + (i % 4)) * scale;
+  const rows = (3 + (i % 6)) * scale;
   const keys = i % 3 === 0 ? 'ABC' : 'AB';
   const colors = [...keys].map((k, j) => `  ${k} ${HEX[(i + j) % HEX.length]} shade ${j + 1}`);
   const pick = (n: number, r: number) => Array.from({ length: n }, (_, j) => keys[(i + r + j) % keys.length]).join('');
@@ -33,23 +39,62 @@ export function smallPattern(i: number): string {
   return `${lines.join('\n')}\n`;
 }
 
-/** CPU time (ms, every thread of this process) of each timed run, in order. */
-const cpuMs: number[] = [];
-
-async function timed(fn: () => Promise<unknown>): Promise<number> {
-  const c0 = process.cpuUsage();
-  const t0 = performance.now();
-  await fn();
-  const wall = performance.now() - t0;
-  const c = process.cpuUsage(c0);
-  cpuMs.push((c.user + c.system) / 1000);
-  return wall;
+/** Writes `count` sample patterns into `dir`; resolves to their size in bytes and the worker threads `--jobs 2` starts for them. */
+async function writeSamples(dir: string, count: number, scale = 1): Promise<{ bytes: number; workers: number }> {
+  await mkdir(dir, { recursive: true });
+  const sizes = new Map<string, number>();
+  for (let i = 0; i < count; i++) {
+    const text = samplePattern(i, scale);
+    const file = join(dir, `p${String(i).padStart(4, '0')}.ffp`);
+    sizes.set(file, Buffer.byteLength(text));
+    await writeFile(file, text);
+  }
+  const tasks = [...sizes.keys()].map((file) => ({ file, formats: [...DEFAULT_OUTPUT_FORMATS] }));
+  return {
+    bytes: [...sizes.values()].reduce((a, b) => a + b, 0),
+    workers: plannedWorkers(tasks, 2, (file) => sizes.get(file)!),
+  };
 }
 
-async function convertOnce(root: string, jobs: number, out: string, formats?: OutputFormat[]): Promise<void> {
-  const summary = await convertPaths(['in'], { out, cwd: root, jobs, force: true, formats });
-  if (summary.converted !== FILES)
-    throw new Error(`converted ${summary.converted} of ${FILES}: ${summary.files.find((f) => f.message)?.message}`);
+// Compiled to dist/bench/, so the launcher is two folders up.
+const launcher = fileURLToPath(new URL('../../bin/fourfold.js', import.meta.url));
+
+interface Run {
+  wall: number;
+  /** CPU time of the process, all its threads, user and system. */
+  cpu: number;
+}
+
+/**
+ * One fresh `fourfold convert` of `from` into a folder of its own. Each run
+ * writes a new folder, as a first conversion does: replacing another run's
+ * files would add thousands of deletions to one run and not the other (ext4
+ * then searches past recently freed inodes). bash's `times` tells the CPU
+ * time of the finished child, which Node cannot read for a child of its own.
+ */
+function convertRun(root: string, from: string, out: string, jobs: number, formats?: readonly OutputFormat[]): Run {
+  const args = ['convert', from, '--out', out, '--jobs', String(jobs), '--force'];
+  if (formats) args.push('--formats', formats.join(','));
+  const script = '"$@" >/dev/null; status=$?; times; exit $status';
+  const t0 = performance.now();
+  const r = spawnSync('bash', ['-c', script, 'bash', process.execPath, launcher, ...args], { cwd: root });
+  const wall = performance.now() - t0;
+  if (r.status !== 0) throw new Error(`fourfold ${args.join(' ')} failed (${r.status}): ${r.stderr.toString()}`);
+  // times prints the shell's own user and system time, then its children's: "0m2.140s 0m0.310s".
+  const children = r.stdout.toString().trim().split('\n').at(-1)!;
+  const [user, system] = [...children.matchAll(/(\d+)m([\d.]+)s/g)].map(
+    (m) => (Number(m[1]) * 60 + Number(m[2])) * 1000,
+  );
+  return { wall, cpu: user! + system! };
+}
+
+/** `--jobs 1` and `--jobs 2`, taking turns so that the machine's drifts touch both alike; the median run of each. */
+function oneAndTwo(root: string, from: string, rounds: number): { one: Run; two: Run } {
+  const runs: Record<1 | 2, Run[]> = { 1: [], 2: [] };
+  for (let k = 0; k < rounds; k++)
+    for (const jobs of [1, 2] as const) runs[jobs].push(convertRun(root, from, `${from}-jobs${jobs}-${k}`, jobs));
+  const median = (xs: Run[]) => [...xs].sort((a, b) => a.wall - b.wall)[Math.floor(xs.length / 2)]!;
+  return { one: median(runs[1]), two: median(runs[2]) };
 }
 
 /**
@@ -62,16 +107,16 @@ async function readAndWrite(root: string, out: string): Promise<number> {
   const inputs = (await readdir(join(root, 'in'))).sort();
   const perInput = Math.ceil(outputs.length / inputs.length);
   const plain = join(root, `plain-${out}`);
-  return timed(async () => {
-    await mkdir(plain, { recursive: true });
-    for (let i = 0; i < inputs.length; i++) {
-      await readFile(join(root, 'in', inputs[i]!));
-      for (let k = 0; k < perInput; k++) {
-        const size = sizes[i * perInput + k];
-        if (size !== undefined) await writeFile(join(plain, `${i}-${k}`), Buffer.alloc(size, 32));
-      }
+  const t0 = performance.now();
+  await mkdir(plain, { recursive: true });
+  for (let i = 0; i < inputs.length; i++) {
+    await readFile(join(root, 'in', inputs[i]!));
+    for (let k = 0; k < perInput; k++) {
+      const size = sizes[i * perInput + k];
+      if (size !== undefined) await writeFile(join(plain, `${i}-${k}`), Buffer.alloc(size, 32));
     }
-  });
+  }
+  return performance.now() - t0;
 }
 
 /** Wall time of `threads` worker threads running `code`, each told its share [from, to) of `total` steps. */
@@ -127,48 +172,49 @@ const bench: Bench = {
   async run() {
     const root = await mkdtemp(join(tmpdir(), 'fourfold-bench-'));
     try {
-      await mkdir(join(root, 'in'));
-      for (let i = 0; i < FILES; i++)
-        await writeFile(join(root, 'in', `p${String(i).padStart(4, '0')}.ffp`), smallPattern(i));
-      // Warm this thread's modules, which --jobs 1 uses; workers start cold either way.
-      await convertPaths(['in/p0000.ffp'], { out: 'warm', cwd: root, jobs: 1, force: true });
-
-      // Each run writes a folder of its own, as a first conversion does: replacing another run's files would
-      // add thousands of deletions to one run and not the other (ext4 then searches past recently freed inodes).
-      const one = await timed(() => convertOnce(root, 1, 'out-1'));
-      const two = await timed(() => convertOnce(root, 2, 'out-2'));
-      const [oneCpu, twoCpu] = cpuMs.slice(-2) as [number, number];
-      const all =
-        availableParallelism() === 2 ? two : await timed(() => convertOnce(root, availableParallelism(), 'out-all'));
-      const baseline = await readAndWrite(root, 'out-2');
-      const withPng = await timed(() => convertOnce(root, availableParallelism(), 'out-png', [...OUTPUT_FORMATS]));
-      const withPngBaseline = await readAndWrite(root, 'out-png');
+      const small = await writeSamples(join(root, 'in'), FILES);
+      const big = 400;
+      const large = await writeSamples(join(root, 'big'), big, 3);
+      const { one, two } = oneAndTwo(root, 'in', 3);
+      const all = availableParallelism() === 2 ? two : convertRun(root, 'in', 'in-all', availableParallelism());
+      const baseline = await readAndWrite(root, 'in-jobs2-0');
+      const bigRuns = oneAndTwo(root, 'big', 1);
+      const withPng = convertRun(root, 'in', 'in-png', availableParallelism(), OUTPUT_FORMATS);
+      const withPngBaseline = await readAndWrite(root, 'in-png');
       const createOne = await fileCreationMs(root, 1);
       const createTwo = await fileCreationMs(root, 2);
       const spinOne = await arithmeticMs(1);
       const spinTwo = await arithmeticMs(2);
+      const about = ({ bytes, workers }: { bytes: number; workers: number }) =>
+        `${Math.round(bytes / 1000)} KB; --jobs 2 starts ${workers} worker thread${workers === 1 ? '' : 's'} beside the calling one`;
       return [
         {
-          name: `convert ${FILES} patterns (default formats ${DEFAULT_OUTPUT_FORMATS.join(',')}): --jobs 1 vs --jobs 2 (speed-up)`,
-          value: one,
-          baseline: two,
+          name: `convert ${FILES} small patterns (${about(small)}; default formats ${DEFAULT_OUTPUT_FORMATS.join(',')}): --jobs 1 vs --jobs 2 (speed-up, median of 3 fresh runs each)`,
+          value: one.wall,
+          baseline: two.wall,
           unit: 'ms',
           goal: { atLeast: 1.7 },
         },
         {
           // On a machine busy with other work, two threads get less than two cores; this says how much of a miss above is the machine.
           name: `  the same two runs in CPU time of all threads: --jobs 2 vs --jobs 1 (the work running in parallel adds)`,
-          value: twoCpu,
-          baseline: oneCpu,
+          value: two.cpu,
+          baseline: one.cpu,
           unit: 'ms',
         },
         {
           // When both runs take the same CPU time, this ratio is the speed-up: V8's background compiler keeps part of
           // a second core busy in --jobs 1 already, and a second lane must compile the same code again.
           name: `  cores the two runs got on average: --jobs 2 vs --jobs 1 (with equal CPU time, the speed-up's ceiling)`,
-          value: twoCpu / two,
-          baseline: oneCpu / one,
+          value: two.cpu / two.wall,
+          baseline: one.cpu / one.wall,
           unit: 'cores',
+        },
+        {
+          name: `  ${big} patterns nine times the size (${about(large)}): --jobs 1 vs --jobs 2 (speed-up)`,
+          value: bigRuns.one.wall,
+          baseline: bigRuns.two.wall,
+          unit: 'ms',
         },
         {
           name: `  the file system's own ceiling: ${4 * FILES} files written and renamed into one folder, 1 thread vs 2 (speed-up)`,
@@ -184,14 +230,14 @@ const bench: Bench = {
         },
         {
           name: `convert ${FILES} patterns (default formats), all ${availableParallelism()} cores, vs reading each and writing files of its outputs' sizes`,
-          value: all,
+          value: all.wall,
           baseline,
           unit: 'ms',
           goal: { atMost: 5 },
         },
         {
           name: `convert ${FILES} patterns --formats ${OUTPUT_FORMATS.join(',')}, all ${availableParallelism()} cores, vs reading each and writing files of its outputs' sizes`,
-          value: withPng,
+          value: withPng.wall,
           baseline: withPngBaseline,
           unit: 'ms',
         },

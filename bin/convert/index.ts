@@ -4,7 +4,7 @@
  * script both call `convertPaths`.
  */
 import { once } from 'node:events';
-import { existsSync } from 'node:fs';
+import { existsSync, statSync } from 'node:fs';
 import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { resolve } from 'node:path';
@@ -49,14 +49,58 @@ export interface ConvertSummary {
 }
 
 /**
- * A worker thread takes about 0.15 s to load its modules, in which the
- * calling thread converts some 50 small patterns, and its first files run
- * slowly while V8 compiles them again. So each worker started must have
- * at least this many files to take, or it slows the batch down (measured on
- * two cores: 10 small patterns took 0.33 to 0.41 s with one lane and 0.44 to
- * 0.57 s with two; 200 took 0.73 to 0.80 s against 0.97 to 1.14 s).
+ * A worker thread pays for itself only with enough work to take: it loads its
+ * modules in about 0.15 s, and V8 then compiles the same hot code again for
+ * it, which for small patterns costs more CPU than converting a few hundred
+ * of them. So a batch starts one worker for each this many bytes of pattern
+ * text. Measured on two cores from a fresh `fourfold convert`: the second
+ * lane broke even at about 200 to 250 KB of pattern text, both for small
+ * patterns (1,000 of about 220 bytes) and for ones nine times their size
+ * (200 of about 920 bytes); below that it was slower (100 small patterns:
+ * 0.48 to 0.53 s with one lane, 0.58 to 0.63 s with two), above it faster
+ * (5,000 small patterns: 5.6 to 5.8 s against 4.1 to 4.3 s).
  */
-export const FILES_PER_WORKER = 64;
+export const PATTERN_BYTES_PER_WORKER = 256 * 1024;
+
+/**
+ * Rasterising is native code that needs no compiling and costs far more per
+ * file, so with PNG among the outputs a worker pays from a few dozen files:
+ * one for each this many (64 small patterns to PNG and the rest: 2.2 to
+ * 2.4 s with one lane, 1.4 to 1.5 s with two).
+ */
+export const PNG_FILES_PER_WORKER = 64;
+
+/**
+ * How many worker threads a batch starts beside the calling thread: at most
+ * one for each lane but the first, each with its share of work (above), and
+ * never one more than there are files left for it.
+ */
+export function plannedWorkers(
+  tasks: readonly Pick<ConvertTask, 'file' | 'formats'>[],
+  lanes: number,
+  sizeOf: (file: string) => number,
+): number {
+  const most = Math.min(lanes, tasks.length) - 1;
+  if (most <= 0) return 0;
+  if (tasks.some((t) => t.formats.includes('png')))
+    return Math.min(most, Math.floor(tasks.length / PNG_FILES_PER_WORKER));
+  // Sizes are read only until every possible worker has its share, so a huge archive is not looked at twice.
+  let bytes = 0;
+  for (const task of tasks) {
+    bytes += sizeOf(task.file);
+    if (bytes >= (most + 1) * PATTERN_BYTES_PER_WORKER) break;
+  }
+  return Math.min(most, Math.floor(bytes / PATTERN_BYTES_PER_WORKER));
+}
+
+/** A file's size, or 0 when it cannot be read: its lane reports that when it gets there. */
+function sizeOf(file: string): number {
+  try {
+    return statSync(file).size;
+  } catch {
+    return 0;
+  }
+}
 
 // Compiled, the worker sits beside this file; from the TypeScript sources there is none to start.
 const workerFile = fileURLToPath(new URL('./worker.js', import.meta.url));
@@ -72,9 +116,10 @@ const workerFile = fileURLToPath(new URL('./worker.js', import.meta.url));
  * workers are running; a thread started meanwhile elsewhere in the process
  * would compile on its own thread too, which is only slower for it.
  */
-function startPool(threads: number, lanes: number): Piscina<WorkerJob, number> {
+function startPool(threads: number): Piscina<WorkerJob, number> {
   const ownFlag = process.execArgv.some((a) => a.includes('concurrent-recompilation'));
-  const compileOnLanes = lanes >= availableParallelism() && !ownFlag;
+  // The lanes are the workers and this thread.
+  const compileOnLanes = threads + 1 >= availableParallelism() && !ownFlag;
   if (compileOnLanes) setFlagsFromString('--no-concurrent-recompilation');
   const pool = new Piscina<WorkerJob, number>({ filename: workerFile, minThreads: threads, maxThreads: threads });
   if (compileOnLanes)
@@ -88,8 +133,7 @@ function startPool(threads: number, lanes: number): Piscina<WorkerJob, number> {
 /**
  * Up to `jobs` lanes take files from one shared queue: this thread, whose
  * modules are loaded already, so it converts from the first moment while
- * the worker threads (at most `jobs - 1`, one for each FILES_PER_WORKER
- * files) are still loading theirs, and one piscina task per worker thread
+ * the worker threads (`plannedWorkers`) are still loading theirs, and one piscina task per worker thread
  * that drains the queue on its own.
  */
 async function runAll(tasks: ConvertTask[], jobs: number, onResult: (r: FileResult) => void): Promise<FileResult[]> {
@@ -100,13 +144,13 @@ async function runAll(tasks: ConvertTask[], jobs: number, onResult: (r: FileResu
   };
   const queue = claimQueue(tasks);
   const lanes = Math.max(1, Math.min(jobs, tasks.length));
-  const threads = existsSync(workerFile) ? Math.min(lanes - 1, Math.floor(tasks.length / FILES_PER_WORKER)) : 0;
+  const threads = existsSync(workerFile) ? plannedWorkers(tasks, lanes, sizeOf) : 0;
   // Lanes in one thread would only take turns, so without workers this thread is the one lane.
   if (threads === 0) {
     await drainQueue(queue, take);
     return results;
   }
-  const pool = startPool(threads, lanes);
+  const pool = startPool(threads);
   const inWorker = async (): Promise<void> => {
     const { port1, port2 } = new MessageChannel();
     let received = 0;

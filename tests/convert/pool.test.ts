@@ -10,7 +10,7 @@ import { mkdir, mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promis
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
-import { convertPaths, FILES_PER_WORKER } from '../../bin/convert/index.js';
+import { convertPaths, PNG_FILES_PER_WORKER } from '../../bin/convert/index.js';
 import { OUTPUT_FORMATS } from '../../bin/convert/formats.js';
 import { BROKEN, FAN, TUBE } from './patterns.js';
 
@@ -20,8 +20,8 @@ let root: string;
 beforeAll(async () => {
   root = await mkdtemp(join(tmpdir(), 'fourfold-pool-'));
   await mkdir(join(root, 'in', 'deep'), { recursive: true });
-  // Enough files that a worker thread starts beside this one (one starts for each FILES_PER_WORKER files).
-  for (let i = 0; i < FILES_PER_WORKER; i++)
+  // Enough files that a worker thread starts beside this one: with PNG among the outputs, one for each PNG_FILES_PER_WORKER.
+  for (let i = 0; i < PNG_FILES_PER_WORKER; i++)
     await writeFile(join(root, 'in', `fan-${i}.ffp`), FAN.replace('Linnet Fan', `Linnet Fan ${i}`));
   await writeFile(join(root, 'in', 'deep', 'tube.ffp'), TUBE);
   await writeFile(join(root, 'in', 'broken.ffp'), BROKEN);
@@ -46,14 +46,14 @@ test(
       onResult: (r) => told.push(r.rel),
     });
     const b = await convertPaths(['in'], { out: 'single', cwd: root, jobs: 1, formats: OUTPUT_FORMATS });
-    expect([a.converted, a.failed, a.exitCode]).toEqual([FILES_PER_WORKER + 1, 1, 1]);
+    expect([a.converted, a.failed, a.exitCode]).toEqual([PNG_FILES_PER_WORKER + 1, 1, 1]);
     expect(a.files.map((f) => f.status)).toEqual(b.files.map((f) => f.status));
     // Both lanes take from one shared queue: each file is converted, and reported, exactly once.
     expect(told.sort()).toEqual(a.files.map((f) => f.rel));
     const files = (await readdir(join(root, 'pool'), { recursive: true }))
       .filter((f) => /\.(svg|png|md|json)$/.test(f))
       .sort();
-    expect(files).toHaveLength((FILES_PER_WORKER + 2) * 4);
+    expect(files).toHaveLength((PNG_FILES_PER_WORKER + 2) * 4);
     for (const f of files)
       expect((await readFile(join(root, 'pool', f))).equals(await readFile(join(root, 'single', f))), f).toBe(true);
   },
