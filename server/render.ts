@@ -87,7 +87,7 @@ export function cachedRenderer(max = 64): Render {
  * be written, PNG is out of order until an operator fixes it, while SVG and
  * everything else still work. The folder's path goes to the log only.
  */
-async function pngOf(svg: string, dpi: number): Promise<Buffer> {
+async function pngOf(svg: string | Buffer, dpi: number): Promise<Buffer> {
   try {
     return await svgToPng(svg, dpi);
   } catch (error) {
