@@ -9,7 +9,7 @@
  * their choosing where a chart takes its font from.
  */
 import { createHash } from 'node:crypto';
-import { mkdir, readFile, rename, rm, stat, writeFile } from 'node:fs/promises';
+import { mkdir, readdir, readFile, rename, rm, stat, utimes, writeFile } from 'node:fs/promises';
 import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { setFlagsFromString } from 'node:v8';
@@ -86,14 +86,52 @@ const isTrueType = (bytes: Buffer): boolean => bytes.length > 12 && bytes.readUI
 async function subset(weight: Weight, text: string): Promise<Buffer> {
   const face = await sfnt(weight);
   const name = `subset-${weight}-${hashOf(face, SUBSETTER_VERSION, text)}.ttf`;
-  const cached = await readFile(join(cacheDir, name)).catch(() => null);
-  if (cached && isTrueType(cached)) return cached;
+  const file = join(cacheDir, name);
+  const cached = await readFile(file).catch(() => null);
+  if (cached && isTrueType(cached)) {
+    // Its time says it is still in use, so pruning keeps it.
+    const now = new Date();
+    await utimes(file, now, now).catch(() => {});
+    return cached;
+  }
   useBaselineWasmOnly();
   const { default: subsetFont } = await import('subset-font');
   const bytes = await subsetFont(face, text, { targetFormat: 'sfnt' });
   // A cache that cannot be written only makes the next run slower.
-  await storeInCache(name, bytes).catch(() => {});
+  await storeInCache(name, bytes)
+    .then(pruneSubsets)
+    .catch(() => {});
   return bytes;
+}
+
+/**
+ * Subsets kept on disk: each chart whose text has characters no earlier one
+ * had adds two files of a few kilobytes, so an archive of varied patterns
+ * converted over months would otherwise grow the folder without end. This
+ * many hold the subsets of hundreds of different charts, a few megabytes.
+ * Once over it, the folder goes down to three quarters, so that a batch of
+ * new charts looks at every file's time once per hundred-odd new subsets,
+ * not at each.
+ */
+export const SUBSETS_KEPT = 512;
+const PRUNED_TO = (SUBSETS_KEPT * 3) / 4;
+
+/** Removes the least recently used subsets when there are more than SUBSETS_KEPT; run after each new one. */
+async function pruneSubsets(): Promise<void> {
+  const names = (await readdir(cacheDir)).filter((n) => n.startsWith('subset-') && n.endsWith('.ttf'));
+  if (names.length <= SUBSETS_KEPT) return;
+  const used = await Promise.all(
+    names.map(async (n) => ({
+      n,
+      at: await stat(join(cacheDir, n)).then(
+        (s) => s.mtimeMs,
+        () => 0,
+      ),
+    })),
+  );
+  used.sort((a, b) => b.at - a.at);
+  // Another lane may prune at the same time; a file already gone is no error.
+  await Promise.all(used.slice(PRUNED_TO).map(({ n }) => rm(join(cacheDir, n), { force: true })));
 }
 
 const subsetCache = new Map<string, Promise<EmbeddedFont[]>>();

@@ -1,5 +1,5 @@
 import { describe, expect, test, vi } from 'vitest';
-import { mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises';
+import { mkdir, mkdtemp, readdir, readFile, rm, utimes, writeFile } from 'node:fs/promises';
 import { createRequire } from 'node:module';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
@@ -74,16 +74,8 @@ describe('the bundled font', () => {
     expect(ink(await svgToPng(svg('NoSuchFamily, monospace'), 96))).toBe(drawn);
   });
 
-  test('a subset made once is read from the disk cache by a fresh process, and a damaged entry is made again', async () => {
-    const saved = process.env.FOURFOLD_CACHE_DIR;
-    process.env.FOURFOLD_CACHE_DIR = await mkdtemp(join(tmpdir(), 'fourfold-font-cache-'));
-    // A fresh copy of the module stands for a new process: its in-memory cache is empty, and it reads the folder anew.
-    const freshFonts = async () => {
-      vi.resetModules();
-      return (await import('../../bin/render/font.js')).embeddedFonts;
-    };
-    const cacheDir = join(process.env.FOURFOLD_CACHE_DIR, 'fonts');
-    try {
+  test('a subset made once is read from the disk cache by a fresh process, and a damaged entry is made again', () =>
+    withCacheDir(async (cacheDir) => {
       const [made, madeBold] = await (await freshFonts())('ABC 123');
       const entries = (await readdir(cacheDir)).sort();
       expect(entries).toEqual([
@@ -101,11 +93,66 @@ describe('the bundled font', () => {
       const [remade] = await (await freshFonts())('ABC 123');
       expect(remade!.base64).toBe(made!.base64);
       expect((await readFile(regularEntry)).toString('base64')).toBe(made!.base64);
-    } finally {
-      await rm(process.env.FOURFOLD_CACHE_DIR, { recursive: true, force: true });
-      if (saved === undefined) delete process.env.FOURFOLD_CACHE_DIR;
-      else process.env.FOURFOLD_CACHE_DIR = saved;
-      vi.resetModules();
-    }
-  });
+    }));
+
+  test('the disk cache keeps at most SUBSETS_KEPT subsets, the most recently used', () =>
+    withCacheDir(async (cacheDir) => {
+      const { SUBSETS_KEPT } = await import('../../bin/render/font.js');
+      await (
+        await freshFonts()
+      )('used');
+      const used = (await readdir(cacheDir)).sort();
+      await mkdir(cacheDir, { recursive: true });
+      // Older than anything real, one second apart: the oldest are the first to go.
+      const stale = Array.from(
+        { length: SUBSETS_KEPT - 2 },
+        (_, i) => `subset-400-stale${String(i).padStart(4, '0')}.ttf`,
+      );
+      for (const [i, name] of stale.entries()) {
+        await writeFile(join(cacheDir, name), 'old');
+        await utimes(join(cacheDir, name), 1_500_000_000 + i, 1_500_000_000 + i);
+      }
+      for (const name of used) await utimes(join(cacheDir, name), 1_400_000_000, 1_400_000_000);
+      // Reading a subset marks it as used again, so it outlives the stale ones.
+      await (
+        await freshFonts()
+      )('used');
+      expect(await readdir(cacheDir)).toHaveLength(SUBSETS_KEPT);
+      // Two new subsets (both weights) take the folder over the limit, and it is cut to three quarters.
+      await (
+        await freshFonts()
+      )('new text');
+      const left = await readdir(cacheDir);
+      // The two weights are stored side by side, so the second may land after the first has pruned.
+      expect(left.length).toBeGreaterThanOrEqual((SUBSETS_KEPT * 3) / 4);
+      expect(left.length).toBeLessThanOrEqual((SUBSETS_KEPT * 3) / 4 + 1);
+      expect(left.filter((n) => !n.includes('stale'))).toHaveLength(4);
+      expect(left).toEqual(expect.arrayContaining(used));
+      expect(left).not.toContain(stale[0]);
+      expect(left).toContain(stale.at(-1));
+    }));
 });
+
+/**
+ * Runs `body` with FOURFOLD_CACHE_DIR set to a fresh folder, handing it that
+ * folder's `fonts`, and puts everything back afterwards.
+ */
+async function withCacheDir(body: (cacheDir: string) => Promise<void>): Promise<void> {
+  const saved = process.env.FOURFOLD_CACHE_DIR;
+  const root = await mkdtemp(join(tmpdir(), 'fourfold-font-cache-'));
+  process.env.FOURFOLD_CACHE_DIR = root;
+  try {
+    await body(join(root, 'fonts'));
+  } finally {
+    await rm(root, { recursive: true, force: true });
+    if (saved === undefined) delete process.env.FOURFOLD_CACHE_DIR;
+    else process.env.FOURFOLD_CACHE_DIR = saved;
+    vi.resetModules();
+  }
+}
+
+/** A fresh copy of the module stands for a new process: its in-memory cache is empty, and it reads the folder anew. */
+async function freshFonts(): Promise<typeof embeddedFonts> {
+  vi.resetModules();
+  return (await import('../../bin/render/font.js')).embeddedFonts;
+}
