@@ -88,7 +88,7 @@ export function plannedWorkers(
   let bytes = 0;
   for (const task of tasks) {
     bytes += sizeOf(task.file);
-    if (bytes >= (most + 1) * PATTERN_BYTES_PER_WORKER) break;
+    if (bytes >= most * PATTERN_BYTES_PER_WORKER) break;
   }
   return Math.min(most, Math.floor(bytes / PATTERN_BYTES_PER_WORKER));
 }
