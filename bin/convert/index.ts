@@ -64,11 +64,13 @@ export const PATTERN_BYTES_PER_WORKER = 256 * 1024;
 
 /**
  * Rasterising is native code that needs no compiling and costs far more per
- * file, so with PNG among the outputs a worker pays from a few dozen files:
- * one for each this many (64 small patterns to PNG and the rest: 2.2 to
- * 2.4 s with one lane, 1.4 to 1.5 s with two).
+ * file, so with PNG among the outputs a worker pays from a dozen files or
+ * so: one starts for each this many (small patterns to all four formats, on
+ * two cores: 16 took 0.70 to 0.81 s with one lane and 0.60 to 0.65 s with
+ * two, 32 took 0.93 to 1.12 s against 0.72 to 0.81 s, 64 took 2.2 to 2.4 s
+ * against 1.4 to 1.5 s).
  */
-export const PNG_FILES_PER_WORKER = 64;
+export const PNG_FILES_PER_WORKER = 16;
 
 /**
  * How many worker threads a batch starts beside the calling thread: at most
