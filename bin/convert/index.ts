@@ -135,8 +135,8 @@ function startPool(threads: number): Piscina<WorkerJob, number> {
 /**
  * Up to `jobs` lanes take files from one shared queue: this thread, whose
  * modules are loaded already, so it converts from the first moment while
- * the worker threads (`plannedWorkers`) are still loading theirs, and one piscina task per worker thread
- * that drains the queue on its own.
+ * the worker threads (`plannedWorkers`) are still loading theirs, and one
+ * piscina task per worker thread that drains the queue on its own.
  */
 async function runAll(tasks: ConvertTask[], jobs: number, onResult: (r: FileResult) => void): Promise<FileResult[]> {
   const results: FileResult[] = new Array<FileResult>(tasks.length);
